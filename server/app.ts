@@ -1,0 +1,102 @@
+import { existsSync } from "node:fs";
+import path from "node:path";
+import { ExpressAuth } from "@auth/express";
+import express, { type RequestHandler } from "express";
+import helmet from "helmet";
+import { pinoHttp } from "pino-http";
+import type { Logger } from "pino";
+import { createAuthConfig } from "./auth/auth-config";
+import { loadCurrentUser } from "./auth/current-user";
+import type { AppConfig } from "./config";
+import type { Db } from "./db/client";
+import type { Mailer } from "./mail/mailer";
+import { apiNotFound, errorHandler } from "./middleware/errors";
+import { signInLimits } from "./middleware/rate-limits";
+import { sameOrigin } from "./middleware/same-origin";
+import { accountsRouter } from "./modules/accounts/accounts.router";
+import { devMailRouter } from "./modules/dev/dev-mail.router";
+import { inksRouter } from "./modules/inks/inks.router";
+
+export type AppDeps = {
+  db: Db;
+  config: AppConfig;
+  mailer: Mailer;
+  logger: Logger;
+  /** In development: Vite's middleware instead of the built client. */
+  clientMiddleware?: RequestHandler;
+  /** Folder of the built client (default ./dist). */
+  clientDir?: string;
+};
+
+export function createApp(deps: AppDeps) {
+  const { db, config, mailer, logger } = deps;
+  const app = express();
+  app.set("trust proxy", config.trustProxy);
+  app.disable("x-powered-by");
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          "script-src": config.dev ? ["'self'", "'unsafe-inline'"] : ["'self'"],
+          "style-src": ["'self'", "'unsafe-inline'"],
+          "img-src": ["'self'", "data:", "blob:"],
+          "font-src": ["'self'"],
+          "connect-src": config.dev ? ["'self'", "ws:"] : ["'self'"],
+          "upgrade-insecure-requests": config.production ? [] : null,
+        },
+      },
+      hsts: config.production,
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => !/^\/(api|auth)\//.test(req.url ?? "") },
+      // Paths only: query strings can carry one-time sign-in tokens.
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, path: req.url.split("?")[0] }),
+        res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+      },
+    }),
+  );
+
+  const authConfig = createAuthConfig({ db, config, mailer });
+  const limits = signInLimits(config.rateLimits);
+  app.post("/auth/callback/credentials", ...limits.passwords);
+  app.post("/auth/signin/nodemailer", ...limits.mail);
+  app.use("/auth", ExpressAuth(authConfig));
+
+  const api = express.Router();
+  api.use(express.json({ limit: "100kb", strict: true }));
+  api.use(sameOrigin(config.appUrl));
+  api.use(loadCurrentUser(db, authConfig));
+  api.get("/health", (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use(accountsRouter(db));
+  api.use(inksRouter(db));
+  if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
+  api.use(apiNotFound);
+  app.use("/api", api);
+
+  if (deps.clientMiddleware) {
+    app.use(deps.clientMiddleware);
+  } else {
+    const clientDir = deps.clientDir ?? path.resolve("dist");
+    const index = path.join(clientDir, "index.html");
+    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
+    app.get("/{*path}", (req, res, next) => {
+      if (req.path.startsWith("/auth/")) return next();
+      if (!existsSync(index)) {
+        res.status(503).type("text").send("The client is not built yet: run `npm run build`.");
+        return;
+      }
+      res.sendFile(index, { maxAge: 0 });
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}

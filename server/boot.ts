@@ -1,0 +1,51 @@
+import type { Server } from "node:http";
+import type { RequestHandler } from "express";
+import pino from "pino";
+import { createApp } from "./app";
+import type { AppConfig } from "./config";
+import { openDatabase } from "./db/client";
+import { migrateToLatest } from "./db/migrate";
+import { databaseIsEmpty, demoSignInsText, seedDemo } from "./demo/seed";
+import { startLocalSmtp, type LocalSmtp } from "./mail/local-smtp";
+import { createMailer } from "./mail/mailer";
+
+export type Running = { server: Server; url: string; close(): Promise<void> };
+
+/** Migrates, seeds the demo when asked and the database is empty, starts the local fakes, listens. */
+export async function boot(
+  config: AppConfig,
+  opts: { seedIfEmpty?: boolean; clientMiddleware?: RequestHandler } = {},
+): Promise<Running> {
+  const logger = pino({ level: config.logLevel });
+  const db = openDatabase(config.dbFile);
+  await migrateToLatest(db);
+
+  if (opts.seedIfEmpty && config.demo && (await databaseIsEmpty(db))) {
+    const seeded = await seedDemo(db);
+    logger.info(seeded, "demo data loaded");
+  }
+
+  let smtp: LocalSmtp | null = null;
+  if (!config.smtpUrl) {
+    smtp = await startLocalSmtp(config.dataDir, Number(process.env.SMTP_PORT ?? 0));
+    logger.info({ port: smtp.port }, "local SMTP server listening (mail is kept under DATA_DIR/mail)");
+  }
+  const mailer = createMailer(config.smtpUrl ? { url: config.smtpUrl } : { host: smtp!.host, port: smtp!.port }, config.mailFrom);
+
+  const app = createApp({ db, config, mailer, logger, clientMiddleware: opts.clientMiddleware });
+  const server = await new Promise<Server>((resolve, reject) => {
+    const s = app.listen(config.port, (err?: Error) => (err ? reject(err) : resolve(s)));
+  });
+  if (config.demo) console.log("\n" + demoSignInsText(config.appUrl) + "\n");
+
+  return {
+    server,
+    url: config.appUrl,
+    async close() {
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      mailer.close();
+      await smtp?.close();
+      await db.destroy();
+    },
+  };
+}

@@ -1,0 +1,94 @@
+import type { Generated, Insertable, Selectable, Updateable } from "kysely";
+
+// Types match what SQLite returns: booleans as 0/1, timestamps as ISO text.
+
+export interface UserTable {
+  id: string;
+  name: string | null;
+  email: string;
+  emailVerified: string | null;
+  image: string | null;
+}
+
+export interface AccountTable {
+  userId: string;
+  type: string;
+  provider: string;
+  providerAccountId: string;
+  refresh_token: string | null;
+  access_token: string | null;
+  expires_at: number | null;
+  token_type: string | null;
+  scope: string | null;
+  id_token: string | null;
+  session_state: string | null;
+}
+
+export interface SessionTable {
+  sessionToken: string;
+  userId: string;
+  expires: string;
+}
+
+export interface VerificationTokenTable {
+  identifier: string;
+  token: string;
+  expires: string;
+}
+
+export interface PasswordTable {
+  user_id: string;
+  hash: string;
+  updated_at: string;
+}
+
+export interface ProfileTable {
+  user_id: string;
+  name: string;
+  bio: Generated<string>;
+  role: Generated<"member" | "moderator" | "admin">;
+  standing: Generated<"new" | "trusted">;
+  suspended_until: string | null;
+  is_demo: Generated<0 | 1>;
+  created_at: string;
+  updated_at: string;
+}
+
+export interface BrandTable {
+  id: Generated<number>;
+  slug: string;
+  name: string;
+  created_at: string;
+}
+
+export interface InkTable {
+  id: Generated<number>;
+  brand_id: number;
+  name: string;
+  type: "dye" | "pigment" | "hybrid";
+  hex: string;
+  lab_l: number;
+  lab_a: number;
+  lab_b: number;
+  discontinued: Generated<0 | 1>;
+  created_at: string;
+  updated_at: string;
+}
+
+export interface Database {
+  User: UserTable;
+  Account: AccountTable;
+  Session: SessionTable;
+  VerificationToken: VerificationTokenTable;
+  passwords: PasswordTable;
+  profiles: ProfileTable;
+  brands: BrandTable;
+  inks: InkTable;
+}
+
+export type Profile = Selectable<ProfileTable>;
+export type NewProfile = Insertable<ProfileTable>;
+export type Brand = Selectable<BrandTable>;
+export type InkRow = Selectable<InkTable>;
+export type NewInk = Insertable<InkTable>;
+export type InkUpdate = Updateable<InkTable>;

@@ -1,4 +1,6 @@
+import { once } from "node:events";
 import { mkdtempSync, rmSync } from "node:fs";
+import type { Server } from "node:http";
 import os from "node:os";
 import path from "node:path";
 import pino from "pino";
@@ -15,7 +17,8 @@ import { createMailer } from "../../server/mail/mailer";
 export const ORIGIN = "http://localhost:3000";
 
 export type TestApp = {
-  app: ReturnType<typeof createApp>;
+  /** The app, listening on a port of its own for the whole test file (links keep one origin). */
+  app: Server;
   db: Db;
   config: AppConfig;
   smtp: LocalSmtp;
@@ -37,7 +40,8 @@ export async function createTestApp(
   if (opts.seed !== false) await seedDemo(db);
   const smtp = await startLocalSmtp(dataDir);
   const mailer = createMailer({ host: smtp.host, port: smtp.port }, config.mailFrom);
-  const app = createApp({ db, config, mailer, logger: pino({ level: "silent" }) });
+  const app = createApp({ db, config, mailer, logger: pino({ level: "silent" }) }).listen(0, "127.0.0.1");
+  await once(app, "listening");
   return {
     app,
     db,
@@ -46,6 +50,7 @@ export async function createTestApp(
     client: () => request.agent(app).set("Origin", ORIGIN),
     mail: () => readCapturedMail(dataDir),
     async close() {
+      await new Promise((resolve) => app.close(resolve));
       mailer.close();
       await smtp.close();
       await db.destroy();

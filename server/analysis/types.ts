@@ -1,0 +1,42 @@
+import type { Lab } from "../../shared/colour/index";
+
+export type { Lab };
+
+/** One catalogue ink as the analysis needs it. */
+export type CatalogueInk = { id: number; name: string; brand: string; lab: Lab; hex: string };
+
+/** Upright 8-bit sRGB pixels, 3 channels, row-major, no padding. */
+export type RgbImage = { width: number; height: number; data: Uint8Array };
+
+/** A point given as fractions (0–1) of the upright image's width and height. */
+export type WhitePoint = { x: number; y: number };
+
+export type Orientation = "horizontal" | "vertical";
+
+/** "match" ΔE2000 ≤ 3, "close" ≤ 8, otherwise "no close ink" (our thresholds). */
+export type MatchConfidence = "match" | "close" | "no close ink";
+
+export type InkSuggestion = { inkId: number; name: string; brand: string; deltaE: number };
+
+export type AnalysisBand = {
+  index: number;
+  /** Fractions 0–1 along the strip: from the left end if horizontal, from the top if vertical. */
+  start: number;
+  end: number;
+  hex: string;
+  lab: Lab;
+  /** 90th percentile ΔE2000 between the band's colour and its per-position colours along the strip. */
+  spread: number;
+  confidence: MatchConfidence;
+  suggestions: InkSuggestion[];
+};
+
+export type AnalysisTransition = { start: number; end: number };
+
+export type AnalysisResult = {
+  orientation: Orientation;
+  /** The paper as photographed (before correction); found=false means no cast correction was made. */
+  paper: { found: boolean; hex: string; lab: Lab };
+  bands: AnalysisBand[];
+  transitions: AnalysisTransition[];
+};

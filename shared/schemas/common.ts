@@ -32,4 +32,5 @@ export const plainText = (min: number, max: number) =>
     .trim()
     .min(min, min <= 1 ? "is required" : `needs at least ${min} characters`)
     .max(max, `must be at most ${max} characters`)
+    // eslint-disable-next-line no-control-regex -- control characters are exactly what we refuse
     .refine((s) => !/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(s), "contains control characters");

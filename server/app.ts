@@ -16,12 +16,15 @@ import { sameOrigin } from "./middleware/same-origin";
 import { accountsRouter } from "./modules/accounts/accounts.router";
 import { devMailRouter } from "./modules/dev/dev-mail.router";
 import { inksRouter } from "./modules/inks/inks.router";
+import { uploadsRouter } from "./modules/uploads/uploads.router";
+import type { Services } from "./services";
 
 export type AppDeps = {
   db: Db;
   config: AppConfig;
   mailer: Mailer;
   logger: Logger;
+  services: Pick<Services, "store" | "uploads">;
   /** In development: Vite's middleware instead of the built client. */
   clientMiddleware?: RequestHandler;
   /** Folder of the built client (default ./dist). */
@@ -77,6 +80,7 @@ export function createApp(deps: AppDeps) {
   });
   api.use(accountsRouter(db));
   api.use(inksRouter(db));
+  api.use(uploadsRouter(deps.services));
   if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);
   app.use("/api", api);

@@ -8,6 +8,7 @@ import { migrateToLatest } from "./db/migrate";
 import { databaseIsEmpty, demoSignInsText, seedDemo } from "./demo/seed";
 import { startLocalSmtp, type LocalSmtp } from "./mail/local-smtp";
 import { createMailer } from "./mail/mailer";
+import { createServices } from "./services";
 
 export type Running = { server: Server; url: string; close(): Promise<void> };
 
@@ -32,7 +33,10 @@ export async function boot(
   }
   const mailer = createMailer(config.smtpUrl ? { url: config.smtpUrl } : { host: smtp!.host, port: smtp!.port }, config.mailFrom);
 
-  const app = createApp({ db, config, mailer, logger, clientMiddleware: opts.clientMiddleware });
+  const services = createServices({ db, config, logger });
+  const recovered = await services.uploads.recover();
+  if (recovered) logger.info({ recovered }, "unfinished uploads taken up again");
+  const app = createApp({ db, config, mailer, logger, services, clientMiddleware: opts.clientMiddleware });
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(config.port, (err?: Error) => (err ? reject(err) : resolve(s)));
   });
@@ -43,6 +47,7 @@ export async function boot(
     url: config.appUrl,
     async close() {
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      await services.close();
       mailer.close();
       await smtp?.close();
       await db.destroy();

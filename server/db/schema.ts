@@ -75,6 +75,29 @@ export interface InkTable {
   updated_at: string;
 }
 
+export interface UploadTable {
+  id: string;
+  owner_id: string;
+  status: "processing" | "ready" | "failed";
+  original_key: string | null;
+  mime: string;
+  byte_size: number;
+  white_x: number | null;
+  white_y: number | null;
+  attempts: Generated<number>;
+  analysis_json: string | null;
+  display_key: string | null;
+  thumb_key: string | null;
+  placeholder: string | null;
+  phash: string | null;
+  width: number | null;
+  height: number | null;
+  error_code: string | null;
+  error_message: string | null;
+  created_at: string;
+  updated_at: string;
+}
+
 export interface Database {
   User: UserTable;
   Account: AccountTable;
@@ -84,6 +107,7 @@ export interface Database {
   profiles: ProfileTable;
   brands: BrandTable;
   inks: InkTable;
+  uploads: UploadTable;
 }
 
 export type Profile = Selectable<ProfileTable>;
@@ -92,3 +116,4 @@ export type Brand = Selectable<BrandTable>;
 export type InkRow = Selectable<InkTable>;
 export type NewInk = Insertable<InkTable>;
 export type InkUpdate = Updateable<InkTable>;
+export type UploadRow = Selectable<UploadTable>;

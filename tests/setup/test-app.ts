@@ -13,6 +13,7 @@ import { migrateToLatest } from "../../server/db/migrate";
 import { seedDemo } from "../../server/demo/seed";
 import { readCapturedMail, startLocalSmtp, type LocalSmtp } from "../../server/mail/local-smtp";
 import { createMailer } from "../../server/mail/mailer";
+import { createServices, type Services } from "../../server/services";
 
 export const ORIGIN = "http://localhost:3000";
 
@@ -22,6 +23,7 @@ export type TestApp = {
   db: Db;
   config: AppConfig;
   smtp: LocalSmtp;
+  services: Services;
   /** A fresh cookie-keeping client that sends our Origin on every request. */
   client(): TestAgent;
   mail(): ReturnType<typeof readCapturedMail>;
@@ -30,7 +32,12 @@ export type TestApp = {
 
 /** A real app on a temporary data folder: migrated SQLite file, local SMTP server, demo data. */
 export async function createTestApp(
-  opts: { seed?: boolean; env?: Record<string, string>; limits?: Partial<AppConfig["rateLimits"]> } = {},
+  opts: {
+    seed?: boolean;
+    env?: Record<string, string>;
+    limits?: Partial<AppConfig["rateLimits"]>;
+    services?: { maxQueue?: number; maxThreads?: number };
+  } = {},
 ): Promise<TestApp> {
   const dataDir = mkdtempSync(path.join(os.tmpdir(), "blendwell-test-"));
   const base = loadConfig({ DATA_DIR: dataDir, NODE_ENV: "test", APP_URL: ORIGIN, ...opts.env });
@@ -40,17 +47,21 @@ export async function createTestApp(
   if (opts.seed !== false) await seedDemo(db);
   const smtp = await startLocalSmtp(dataDir);
   const mailer = createMailer({ host: smtp.host, port: smtp.port }, config.mailFrom);
-  const app = createApp({ db, config, mailer, logger: pino({ level: "silent" }) }).listen(0, "127.0.0.1");
+  const logger = pino({ level: "silent" });
+  const services = createServices({ db, config, logger, maxThreads: 1, ...opts.services });
+  const app = createApp({ db, config, mailer, logger, services }).listen(0, "127.0.0.1");
   await once(app, "listening");
   return {
     app,
     db,
     config,
     smtp,
+    services,
     client: () => request.agent(app).set("Origin", ORIGIN),
     mail: () => readCapturedMail(dataDir),
     async close() {
       await new Promise((resolve) => app.close(resolve));
+      await services.close();
       mailer.close();
       await smtp.close();
       await db.destroy();

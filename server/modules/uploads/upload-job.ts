@@ -1,0 +1,22 @@
+import type { Analysis } from "../../../shared/schemas/uploads";
+
+export type CatalogueEntry = { id: number; name: string; brand: string; hex: string; lab: { l: number; a: number; b: number } };
+
+/** What the worker thread gets: plain, serialisable data only. */
+export type UploadJob = {
+  originalPath: string;
+  /** Folder the derivatives are written into (created by the worker). */
+  outDir: string;
+  catalogue: CatalogueEntry[];
+  stash: number[];
+  white?: { x: number; y: number };
+};
+
+export type UploadJobResult =
+  | {
+      ok: true;
+      analysis: Analysis;
+      /** File names inside outDir, the placeholder as a data URL, the perceptual hash. */
+      images: { display: string; thumb: string; placeholder: string; phash: string; width: number; height: number };
+    }
+  | { ok: false; code: string; message: string };

@@ -1,0 +1,85 @@
+import type { DbOrTx } from "../../db/client";
+import type { UploadRow } from "../../db/schema";
+
+export function findUpload(db: DbOrTx, id: string) {
+  return db.selectFrom("uploads").selectAll().where("id", "=", id).executeTakeFirst();
+}
+
+export async function insertUpload(
+  db: DbOrTx,
+  row: Pick<UploadRow, "id" | "owner_id" | "original_key" | "mime" | "byte_size" | "white_x" | "white_y" | "created_at">,
+) {
+  await db
+    .insertInto("uploads")
+    .values({ ...row, status: "processing", updated_at: row.created_at })
+    .execute();
+}
+
+export async function markProcessing(db: DbOrTx, id: string, white: { x: number; y: number } | null, now: string) {
+  await db
+    .updateTable("uploads")
+    .set({ status: "processing", white_x: white?.x ?? null, white_y: white?.y ?? null, error_code: null, error_message: null, updated_at: now })
+    .where("id", "=", id)
+    .execute();
+}
+
+export async function startAttempt(db: DbOrTx, id: string) {
+  await db
+    .updateTable("uploads")
+    .set((eb) => ({ attempts: eb("attempts", "+", 1) }))
+    .where("id", "=", id)
+    .execute();
+}
+
+export async function markReady(
+  db: DbOrTx,
+  id: string,
+  r: Pick<UploadRow, "analysis_json" | "display_key" | "thumb_key" | "placeholder" | "phash" | "width" | "height">,
+  now: string,
+) {
+  await db
+    .updateTable("uploads")
+    .set({ ...r, status: "ready", attempts: 0, error_code: null, error_message: null, updated_at: now })
+    .where("id", "=", id)
+    .execute();
+}
+
+export async function markFailed(db: DbOrTx, id: string, code: string, message: string, now: string) {
+  await db
+    .updateTable("uploads")
+    .set({
+      status: "failed",
+      error_code: code,
+      error_message: message,
+      original_key: null,
+      analysis_json: null,
+      display_key: null,
+      thumb_key: null,
+      placeholder: null,
+      updated_at: now,
+    })
+    .where("id", "=", id)
+    .execute();
+}
+
+/** A re-run that failed keeps the photo and files, so the member can try another white point. */
+export async function markRerunFailed(db: DbOrTx, id: string, code: string, message: string, now: string) {
+  await db
+    .updateTable("uploads")
+    .set({ status: "failed", error_code: code, error_message: message, updated_at: now })
+    .where("id", "=", id)
+    .execute();
+}
+
+export function listProcessing(db: DbOrTx) {
+  return db.selectFrom("uploads").selectAll().where("status", "=", "processing").orderBy("created_at").execute();
+}
+
+export async function loadCatalogue(db: DbOrTx) {
+  const rows = await db
+    .selectFrom("inks")
+    .innerJoin("brands", "brands.id", "inks.brand_id")
+    .select(["inks.id", "inks.name", "inks.hex", "inks.lab_l", "inks.lab_a", "inks.lab_b", "brands.name as brand"])
+    .execute();
+  return rows.map((r) => ({ id: r.id, name: r.name, brand: r.brand, hex: r.hex, lab: { l: r.lab_l, a: r.lab_a, b: r.lab_b } }));
+}

@@ -1,0 +1,57 @@
+import { z } from "zod";
+import type { LabValue } from "./common";
+
+export const uploadStatuses = ["processing", "ready", "failed"] as const;
+export type UploadStatus = (typeof uploadStatuses)[number];
+
+export type InkSuggestion = { inkId: number; name: string; brand: string; deltaE: number };
+
+export type AnalysisBand = {
+  index: number;
+  /** Fractions 0–1 along the strip, from the left (horizontal) or top (vertical) end. */
+  start: number;
+  end: number;
+  hex: string;
+  lab: LabValue;
+  spread?: number;
+  confidence: "match" | "close" | "no close ink";
+  suggestions: InkSuggestion[];
+};
+
+export type Analysis = {
+  orientation: "horizontal" | "vertical";
+  paper: { found: boolean; hex: string; lab: LabValue };
+  bands: AnalysisBand[];
+  transitions: { start: number; end: number }[];
+};
+
+export type UploadImages = { display: string; thumb: string; placeholder: string };
+
+export type Upload = {
+  id: string;
+  status: UploadStatus;
+  error?: { code: string; message: string };
+  analysis?: Analysis;
+  images?: UploadImages;
+  createdAt: string;
+};
+
+const fraction = z.coerce
+  .number({ error: "must be a number" })
+  .min(0, "must be between 0 and 1")
+  .max(1, "must be between 0 and 1");
+
+/** Text fields sent beside the `image` file (multipart). */
+export const uploadFields = z
+  .strictObject({ whiteX: fraction.optional(), whiteY: fraction.optional() })
+  .refine((v) => (v.whiteX === undefined) === (v.whiteY === undefined), {
+    message: "give both whiteX and whiteY, or neither",
+    path: ["whiteX"],
+  });
+
+/** Re-run the analysis of an upload, optionally with a tapped paper-white point. */
+export const reanalyseInput = z.strictObject({
+  white: z.strictObject({ x: fraction, y: fraction }).optional(),
+});
+
+export const uploadIdParams = z.strictObject({ id: z.string().uuid("is not an upload id") });

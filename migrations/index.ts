@@ -2,6 +2,7 @@ import type { Migration } from "kysely";
 import * as m0001 from "./20261202_0001_accounts";
 import * as m0002 from "./20261202_0002_catalogue";
 import * as m0003 from "./20261202_0003_uploads";
+import * as m0004 from "./20261202_0004_strips";
 
 // Every migration, by name (the names sort in the order they run). Add new files here;
 // never edit one that has run.
@@ -9,4 +10,5 @@ export const migrations: Record<string, Migration> = {
   "20261202_0001_accounts": m0001,
   "20261202_0002_catalogue": m0002,
   "20261202_0003_uploads": m0003,
+  "20261202_0004_strips": m0004,
 };

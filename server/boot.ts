@@ -36,6 +36,13 @@ export async function boot(
   const services = createServices({ db, config, logger });
   const recovered = await services.uploads.recover();
   if (recovered) logger.info({ recovered }, "unfinished uploads taken up again");
+  const cleanup = async () => {
+    const removed = await services.uploads.cleanupDrafts();
+    if (removed) logger.info({ removed }, "old drafts removed");
+  };
+  await cleanup();
+  const cleanupTimer = setInterval(() => void cleanup().catch((err) => logger.error({ err }, "draft cleanup failed")), 60 * 60 * 1000);
+  cleanupTimer.unref();
   const app = createApp({ db, config, mailer, logger, services, clientMiddleware: opts.clientMiddleware });
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(config.port, (err?: Error) => (err ? reject(err) : resolve(s)));
@@ -46,6 +53,7 @@ export async function boot(
     server,
     url: config.appUrl,
     async close() {
+      clearInterval(cleanupTimer);
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await services.close();
       mailer.close();

@@ -4,6 +4,7 @@ import type { AppConfig } from "./config";
 import type { Db } from "./db/client";
 import { createWorkerPool } from "./jobs/worker-pool";
 import type { UploadJob, UploadJobResult } from "./modules/uploads/upload-job";
+import { createStripsService } from "./modules/strips/strips.service";
 import { createUploadsService } from "./modules/uploads/uploads.service";
 import { createLocalFileStore } from "./storage/file-store";
 
@@ -18,9 +19,11 @@ export function createServices(deps: { db: Db; config: AppConfig; logger: Logger
     maxThreads: deps.maxThreads,
   });
   const uploads = createUploadsService({ db: deps.db, store, pool, logger: deps.logger });
+  const strips = createStripsService({ db: deps.db, store });
   return {
     store,
     uploads,
+    strips,
     async close() {
       await uploads.idle();
       await pool.close();

@@ -21,7 +21,7 @@ export type PaperEstimate = {
 
 // Sampling and acceptance thresholds. They are our own, chosen on synthetic photos (see
 // docs/decisions/003-paper-white-and-adaptation.md), not from a standard.
-const TARGET_SAMPLES = 60_000;
+const TARGET_SAMPLES = 25_000;
 const BRIGHT_FRACTION = 0.45; // paper may sit in a vignette corner at ~half the peak brightness
 const CHROMA_BIN = 0.004; // linear-rgb chromaticity histogram bin
 const CHROMA_TOLERANCE = 0.014; // how far from the modal chromaticity a paper pixel may be
@@ -31,14 +31,43 @@ const MIN_TOTAL_PAPER = 0.25; // … or share of the whole image
 
 const Y_ROW = [SRGB_TO_XYZ[3], SRGB_TO_XYZ[4], SRGB_TO_XYZ[5]];
 
-type Sample = { x: number; y: number; r: number; g: number; b: number; lum: number; border: boolean; clipped: boolean };
+/** Sample points on a regular grid, as parallel typed arrays. */
+type Samples = {
+  n: number;
+  x: Float64Array; // normalised position, -0.5…0.5
+  y: Float64Array;
+  r: Float64Array; // linear sRGB
+  g: Float64Array;
+  b: Float64Array;
+  lum: Float64Array;
+  cr: Float64Array; // chromaticity r/(r+g+b), g/(r+g+b)
+  cg: Float64Array;
+  border: Uint8Array;
+  clipped: Uint8Array;
+};
 
-function takeSamples(img: RgbImage): Sample[] {
+function takeSamples(img: RgbImage): Samples {
   const { width: w, height: h, data } = img;
   const step = Math.max(1, Math.floor(Math.sqrt((w * h) / TARGET_SAMPLES)));
+  const cols = Math.ceil((w - Math.floor(step / 2)) / step);
+  const rows = Math.ceil((h - Math.floor(step / 2)) / step);
+  const cap = Math.max(0, cols * rows);
+  const s: Samples = {
+    n: 0,
+    x: new Float64Array(cap),
+    y: new Float64Array(cap),
+    r: new Float64Array(cap),
+    g: new Float64Array(cap),
+    b: new Float64Array(cap),
+    lum: new Float64Array(cap),
+    cr: new Float64Array(cap),
+    cg: new Float64Array(cap),
+    border: new Uint8Array(cap),
+    clipped: new Uint8Array(cap),
+  };
   const bw = 0.08 * w;
   const bh = 0.08 * h;
-  const out: Sample[] = [];
+  let k = 0;
   for (let y = Math.floor(step / 2); y < h; y += step) {
     for (let x = Math.floor(step / 2); x < w; x += step) {
       const i = (y * w + x) * 3;
@@ -48,43 +77,73 @@ function takeSamples(img: RgbImage): Sample[] {
       const r = SRGB8_TO_LINEAR[r8];
       const g = SRGB8_TO_LINEAR[g8];
       const b = SRGB8_TO_LINEAR[b8];
-      out.push({
-        x: x / w - 0.5,
-        y: y / h - 0.5,
-        r,
-        g,
-        b,
-        lum: Y_ROW[0] * r + Y_ROW[1] * g + Y_ROW[2] * b,
-        border: x < bw || x >= w - bw || y < bh || y >= h - bh,
-        clipped: r8 >= 254 || g8 >= 254 || b8 >= 254,
-      });
+      const sum = r + g + b;
+      s.x[k] = x / w - 0.5;
+      s.y[k] = y / h - 0.5;
+      s.r[k] = r;
+      s.g[k] = g;
+      s.b[k] = b;
+      s.lum[k] = Y_ROW[0] * r + Y_ROW[1] * g + Y_ROW[2] * b;
+      s.cr[k] = sum > 1e-6 ? r / sum : 1 / 3;
+      s.cg[k] = sum > 1e-6 ? g / sum : 1 / 3;
+      s.border[k] = x < bw || x >= w - bw || y < bh || y >= h - bh ? 1 : 0;
+      s.clipped[k] = r8 >= 254 || g8 >= 254 || b8 >= 254 ? 1 : 0;
+      k++;
     }
   }
-  return out;
+  s.n = k;
+  return s;
 }
 
-function quantile(values: number[], q: number): number {
-  if (values.length === 0) return NaN;
-  const s = Float64Array.from(values).sort();
-  const pos = Math.min(s.length - 1, Math.max(0, q * (s.length - 1)));
-  const lo = Math.floor(pos);
-  const hi = Math.ceil(pos);
-  return s[lo] + (s[hi] - s[lo]) * (pos - lo);
+/** k-th smallest value (0-based) of v, reordering v in place (Hoare's quickselect). */
+function selectKth(v: Float64Array, k: number): number {
+  let lo = 0;
+  let hi = v.length - 1;
+  while (hi > lo) {
+    const pivot = v[(lo + hi) >> 1];
+    let i = lo;
+    let j = hi;
+    while (i <= j) {
+      while (v[i] < pivot) i++;
+      while (v[j] > pivot) j--;
+      if (i <= j) {
+        const t = v[i];
+        v[i] = v[j];
+        v[j] = t;
+        i++;
+        j--;
+      }
+    }
+    if (k <= j) hi = j;
+    else if (k >= i) lo = i;
+    else return v[k];
+  }
+  return v[k];
 }
 
-function chromaticity(s: { r: number; g: number; b: number }): [number, number] {
-  const sum = s.r + s.g + s.b;
-  return sum > 1e-6 ? [s.r / sum, s.g / sum] : [1 / 3, 1 / 3];
+/** Quantile (nearest rank) of arr[idx[...]], or of all of arr. */
+function quantileOf(arr: Float64Array, q: number, idx?: Int32Array): number {
+  const n = idx ? idx.length : arr.length;
+  if (n === 0) return NaN;
+  const v = new Float64Array(n);
+  for (let i = 0; i < n; i++) v[i] = idx ? arr[idx[i]] : arr[i];
+  return selectKth(v, Math.min(n - 1, Math.max(0, Math.round(q * (n - 1)))));
+}
+
+function select(n: number, keep: (i: number) => boolean): Int32Array {
+  const out = new Int32Array(n);
+  let k = 0;
+  for (let i = 0; i < n; i++) if (keep(i)) out[k++] = i;
+  return out.slice(0, k);
 }
 
 /** The most common chromaticity among bright samples (the paper is the largest bright area). */
-function modalChromaticity(bright: Sample[]): [number, number] {
+function modalChromaticity(s: Samples, bright: Int32Array): [number, number] {
   const n = Math.round(1 / CHROMA_BIN);
   const hist = new Float64Array(n * n);
-  for (const s of bright) {
-    const [cr, cg] = chromaticity(s);
-    const i = Math.min(n - 1, Math.max(0, Math.floor(cr / CHROMA_BIN)));
-    const j = Math.min(n - 1, Math.max(0, Math.floor(cg / CHROMA_BIN)));
+  for (const k of bright) {
+    const i = Math.min(n - 1, Math.max(0, Math.floor(s.cr[k] / CHROMA_BIN)));
+    const j = Math.min(n - 1, Math.max(0, Math.floor(s.cg[k] / CHROMA_BIN)));
     hist[i * n + j] += 1;
   }
   let best = -1;
@@ -105,34 +164,38 @@ function modalChromaticity(bright: Sample[]): [number, number] {
   let sr = 0;
   let sg = 0;
   let cnt = 0;
-  for (const s of bright) {
-    const [cr, cg] = chromaticity(s);
-    if (Math.abs(cr - (bi + 0.5) * CHROMA_BIN) <= 1.5 * CHROMA_BIN && Math.abs(cg - (bj + 0.5) * CHROMA_BIN) <= 1.5 * CHROMA_BIN) {
-      sr += cr;
-      sg += cg;
+  for (const k of bright) {
+    if (Math.abs(s.cr[k] - (bi + 0.5) * CHROMA_BIN) <= 1.5 * CHROMA_BIN && Math.abs(s.cg[k] - (bj + 0.5) * CHROMA_BIN) <= 1.5 * CHROMA_BIN) {
+      sr += s.cr[k];
+      sg += s.cg[k];
       cnt++;
     }
   }
   return cnt > 0 ? [sr / cnt, sg / cnt] : [(bi + 0.5) * CHROMA_BIN, (bj + 0.5) * CHROMA_BIN];
 }
 
-function basis(x: number, y: number, order: 0 | 1 | 2): number[] {
-  if (order === 0) return [1];
-  if (order === 1) return [1, x, y];
-  return [1, x, y, x * x, x * y, y * y];
-}
-
-/** Least squares via normal equations with partial pivoting; tiny systems only. */
-function solveLeastSquares(rows: number[][], targets: number[]): number[] | null {
-  const k = rows[0].length;
-  const a = Array.from({ length: k }, () => new Array<number>(k + 1).fill(0));
-  for (let r = 0; r < rows.length; r++) {
-    const row = rows[r];
+/** Weighted least squares of lum on the basis, via normal equations with partial pivoting. */
+function fitCoefficients(s: Samples, idx: Int32Array, order: 1 | 2): number[] | null {
+  const k = order === 1 ? 3 : 6;
+  const a = Array.from({ length: k }, () => new Float64Array(k + 1));
+  const row = new Float64Array(6);
+  for (const p of idx) {
+    const x = s.x[p];
+    const y = s.y[p];
+    row[0] = 1;
+    row[1] = x;
+    row[2] = y;
+    row[3] = x * x;
+    row[4] = x * y;
+    row[5] = y * y;
+    const t = s.lum[p];
     for (let i = 0; i < k; i++) {
-      for (let j = 0; j < k; j++) a[i][j] += row[i] * row[j];
-      a[i][k] += row[i] * targets[r];
+      const ri = row[i];
+      for (let j = i; j < k; j++) a[i][j] += ri * row[j];
+      a[i][k] += ri * t;
     }
   }
+  for (let i = 0; i < k; i++) for (let j = 0; j < i; j++) a[i][j] = a[j][i];
   for (let c = 0; c < k; c++) {
     let p = c;
     for (let r = c + 1; r < k; r++) if (Math.abs(a[r][c]) > Math.abs(a[p][c])) p = r;
@@ -144,7 +207,7 @@ function solveLeastSquares(rows: number[][], targets: number[]): number[] | null
       for (let j = c; j <= k; j++) a[r][j] -= f * a[c][j];
     }
   }
-  return a.map((row, i) => row[k] / row[i]);
+  return a.map((r, i) => r[k] / r[i]);
 }
 
 export function evaluateField(field: PaperField, x: number, y: number): number {
@@ -155,30 +218,26 @@ export function evaluateField(field: PaperField, x: number, y: number): number {
 }
 
 /** Fits the paper brightness field, rejecting shadows, glare and pale inks as outliers. */
-function fitField(paper: Sample[]): { field: PaperField; kept: Sample[] } {
+function fitField(s: Samples, paper: Int32Array): { field: PaperField; kept: Int32Array } {
   let kept = paper;
-  const xs = paper.map((s) => s.x);
-  const ys = paper.map((s) => s.y);
-  const spanX = quantile(xs, 0.98) - quantile(xs, 0.02);
-  const spanY = quantile(ys, 0.98) - quantile(ys, 0.02);
+  const spanX = quantileOf(s.x, 0.98, paper) - quantileOf(s.x, 0.02, paper);
+  const spanY = quantileOf(s.y, 0.98, paper) - quantileOf(s.y, 0.02, paper);
   const order: 0 | 1 | 2 = paper.length >= 400 && spanX > 0.6 && spanY > 0.6 ? 2 : paper.length >= 100 && (spanX > 0.4 || spanY > 0.4) ? 1 : 0;
-  let field: PaperField = { coefficients: [quantile(paper.map((s) => s.lum), 0.5)] };
+  let field: PaperField = { coefficients: [quantileOf(s.lum, 0.5, paper)] };
   for (let iter = 0; iter < 4; iter++) {
-    const coef = order === 0 ? null : solveLeastSquares(kept.map((s) => basis(s.x, s.y, order)), kept.map((s) => s.lum));
-    field = coef ? { coefficients: coef } : { coefficients: [quantile(kept.map((s) => s.lum), 0.5)] };
-    const next = paper.filter((s) => {
-      const f = evaluateField(field, s.x, s.y);
-      const ratio = f > 0 ? s.lum / f : 0;
+    const coef = order === 0 ? null : fitCoefficients(s, kept, order);
+    field = coef ? { coefficients: coef } : { coefficients: [quantileOf(s.lum, 0.5, kept)] };
+    const f = field;
+    const next = select(paper.length, (i) => {
+      const p = paper[i];
+      const v = evaluateField(f, s.x[p], s.y[p]);
+      const ratio = v > 0 ? s.lum[p] / v : 0;
       return ratio >= FIELD_BAND[0] && ratio <= FIELD_BAND[1];
-    });
+    }).map((i) => paper[i]);
     if (next.length < Math.max(20, kept.length * 0.5)) break;
     kept = next;
   }
   return { field, kept };
-}
-
-function medianRgb(samples: { r: number; g: number; b: number }[]): [number, number, number] {
-  return [quantile(samples.map((s) => s.r), 0.5), quantile(samples.map((s) => s.g), 0.5), quantile(samples.map((s) => s.b), 0.5)];
 }
 
 function correctionFor(whiteLinear: [number, number, number]): number[] {
@@ -189,6 +248,11 @@ function correctionFor(whiteLinear: [number, number, number]): number[] {
 /** No correction: the photo is taken as already balanced, sRGB white = paper white. */
 export function noPaper(): PaperEstimate {
   return { found: false, measuredLinear: [1, 1, 1], field: { coefficients: [1] }, correction: [...SRGB_TO_XYZ], paperSamples: 0 };
+}
+
+function medianRgb(samples: { r: number; g: number; b: number }[]): [number, number, number] {
+  const q = (f: (p: { r: number; g: number; b: number }) => number) => quantileOf(Float64Array.from(samples, f), 0.5);
+  return [q((p) => p.r), q((p) => p.g), q((p) => p.b)];
 }
 
 /** Median linear colour in a small disc around a point given as fractions of the image. */
@@ -214,68 +278,73 @@ function sampleAt(img: RgbImage, at: WhitePoint): [number, number, number] {
  * the image. With `white`, that point's colour is the paper, and pixels like it refine the field.
  */
 export function findPaperWhite(img: RgbImage, white?: WhitePoint): PaperEstimate {
-  const samples = takeSamples(img);
-  if (samples.length === 0) return noPaper();
-  const peak = quantile(samples.map((s) => s.lum), 0.98);
+  const s = takeSamples(img);
+  if (s.n === 0) return noPaper();
+  const peak = quantileOf(s.lum, 0.98);
   if (!(peak > 0.02)) return noPaper();
 
   let target: [number, number];
   let pointColour: [number, number, number] | null = null;
   if (white) {
     pointColour = sampleAt(img, white);
-    target = chromaticity({ r: pointColour[0], g: pointColour[1], b: pointColour[2] });
+    const sum = pointColour[0] + pointColour[1] + pointColour[2];
+    target = sum > 1e-6 ? [pointColour[0] / sum, pointColour[1] / sum] : [1 / 3, 1 / 3];
   } else {
-    let bright = samples.filter((s) => s.lum >= BRIGHT_FRACTION * peak && !s.clipped);
+    let bright = select(s.n, (i) => s.lum[i] >= BRIGHT_FRACTION * peak && !s.clipped[i]);
     // An over-exposed sheet of paper is all clipped: then clipped samples are the paper.
-    if (bright.length < 0.05 * samples.length) bright = samples.filter((s) => s.lum >= BRIGHT_FRACTION * peak);
+    if (bright.length < 0.05 * s.n) bright = select(s.n, (i) => s.lum[i] >= BRIGHT_FRACTION * peak);
     if (bright.length < 50) return noPaper();
-    target = modalChromaticity(bright);
+    target = modalChromaticity(s, bright);
   }
 
   const refLum = pointColour ? Y_ROW[0] * pointColour[0] + Y_ROW[1] * pointColour[1] + Y_ROW[2] * pointColour[2] : peak;
-  const candidates = samples.filter((s) => {
-    if (s.lum < BRIGHT_FRACTION * refLum) return false;
-    const [cr, cg] = chromaticity(s);
-    return Math.hypot(cr - target[0], cg - target[1]) <= CHROMA_TOLERANCE;
-  });
+  const candidates = select(s.n, (i) => s.lum[i] >= BRIGHT_FRACTION * refLum && Math.hypot(s.cr[i] - target[0], s.cg[i] - target[1]) <= CHROMA_TOLERANCE);
 
   if (!white) {
-    const borderTotal = samples.filter((s) => s.border).length;
-    const borderPaper = candidates.filter((s) => s.border).length;
-    const enough = (borderTotal > 0 && borderPaper / borderTotal >= MIN_BORDER_PAPER) || candidates.length / samples.length >= MIN_TOTAL_PAPER;
+    let borderTotal = 0;
+    for (let i = 0; i < s.n; i++) borderTotal += s.border[i];
+    let borderPaper = 0;
+    for (const i of candidates) borderPaper += s.border[i];
+    const enough = (borderTotal > 0 && borderPaper / borderTotal >= MIN_BORDER_PAPER) || candidates.length / s.n >= MIN_TOTAL_PAPER;
     if (!enough) return noPaper();
   }
 
   let field: PaperField;
-  let kept: Sample[];
+  let kept: Int32Array;
   if (candidates.length >= 20) {
-    ({ field, kept } = fitField(candidates));
+    ({ field, kept } = fitField(s, candidates));
   } else if (pointColour) {
-    const lum = Y_ROW[0] * pointColour[0] + Y_ROW[1] * pointColour[1] + Y_ROW[2] * pointColour[2];
-    field = { coefficients: [lum] };
-    kept = [];
+    field = { coefficients: [refLum] };
+    kept = new Int32Array(0);
   } else {
     return noPaper();
   }
   if (pointColour && white) {
     // Anchor the field to the chosen point so the member's white becomes exactly white there.
-    const lum = Y_ROW[0] * pointColour[0] + Y_ROW[1] * pointColour[1] + Y_ROW[2] * pointColour[2];
     const f = evaluateField(field, white.x - 0.5, white.y - 0.5);
-    if (f > 1e-6 && lum > 1e-6) field = { coefficients: field.coefficients.map((c) => (c * lum) / f) };
+    if (f > 1e-6 && refLum > 1e-6) field = { coefficients: field.coefficients.map((c) => (c * refLum) / f) };
   }
 
   // Paper colour normalised to Y = 1 by the field, so only its chromaticity drives the adaptation.
-  const normalised = kept.length > 0
-    ? medianRgb(kept.map((s) => {
-        const f = Math.max(1e-6, evaluateField(field, s.x, s.y));
-        return { r: s.r / f, g: s.g / f, b: s.b / f };
-      }))
-    : (() => {
-        const c = pointColour!;
-        const lum = Y_ROW[0] * c[0] + Y_ROW[1] * c[1] + Y_ROW[2] * c[2];
-        return [c[0] / lum, c[1] / lum, c[2] / lum] as [number, number, number];
-      })();
-  const measured = pointColour ?? medianRgb(kept);
+  let normalised: [number, number, number];
+  let measured: [number, number, number];
+  if (kept.length > 0) {
+    const nr = new Float64Array(kept.length);
+    const ng = new Float64Array(kept.length);
+    const nb = new Float64Array(kept.length);
+    kept.forEach((p, i) => {
+      const f = Math.max(1e-6, evaluateField(field, s.x[p], s.y[p]));
+      nr[i] = s.r[p] / f;
+      ng[i] = s.g[p] / f;
+      nb[i] = s.b[p] / f;
+    });
+    normalised = [quantileOf(nr, 0.5), quantileOf(ng, 0.5), quantileOf(nb, 0.5)];
+    measured = pointColour ?? [quantileOf(s.r, 0.5, kept), quantileOf(s.g, 0.5, kept), quantileOf(s.b, 0.5, kept)];
+  } else {
+    const c = pointColour!;
+    normalised = [c[0] / refLum, c[1] / refLum, c[2] / refLum];
+    measured = c;
+  }
   return { found: true, measuredLinear: measured, field, correction: correctionFor(normalised), paperSamples: kept.length };
 }
 

@@ -98,6 +98,46 @@ export interface UploadTable {
   updated_at: string;
 }
 
+export interface StripTable {
+  id: Generated<number>;
+  author_id: string;
+  upload_id: string;
+  title: string;
+  notes_html: string;
+  paper: "smooth-cardstock" | "hot-press" | "cold-press" | "mixed-media" | "other";
+  tools_json: string;
+  video_url: string | null;
+  status: "pending" | "published" | "hidden" | "returned" | "rejected";
+  status_reason: string | null;
+  version: Generated<number>;
+  orientation: "horizontal" | "vertical";
+  ink_count: number;
+  saves: Generated<number>;
+  phash: string | null;
+  created_at: string;
+  updated_at: string;
+  published_at: string | null;
+}
+
+export interface StripInkTable {
+  strip_id: number;
+  position: number;
+  ink_id: number;
+}
+
+export interface StripBandTable {
+  strip_id: number;
+  position: number;
+  start_frac: number;
+  end_frac: number;
+  lab_l: number;
+  lab_a: number;
+  lab_b: number;
+  hex: string;
+  ink_id: number | null;
+  delta_e: number | null;
+}
+
 export interface Database {
   User: UserTable;
   Account: AccountTable;
@@ -108,6 +148,9 @@ export interface Database {
   brands: BrandTable;
   inks: InkTable;
   uploads: UploadTable;
+  strips: StripTable;
+  strip_inks: StripInkTable;
+  strip_bands: StripBandTable;
 }
 
 export type Profile = Selectable<ProfileTable>;
@@ -117,3 +160,4 @@ export type InkRow = Selectable<InkTable>;
 export type NewInk = Insertable<InkTable>;
 export type InkUpdate = Updateable<InkTable>;
 export type UploadRow = Selectable<UploadTable>;
+export type StripRow = Selectable<StripTable>;

@@ -83,3 +83,20 @@ export async function loadCatalogue(db: DbOrTx) {
     .execute();
   return rows.map((r) => ({ id: r.id, name: r.name, brand: r.brand, hex: r.hex, lab: { l: r.lab_l, a: r.lab_a, b: r.lab_b } }));
 }
+
+/** Uploads never posted as a strip, last touched before the cutoff. */
+export function listStaleDrafts(db: DbOrTx, cutoff: string) {
+  return db
+    .selectFrom("uploads")
+    .select(["id", "original_key"])
+    .where("updated_at", "<", cutoff)
+    .where("status", "!=", "processing")
+    .where(({ not, exists, selectFrom }) =>
+      not(exists(selectFrom("strips").select("strips.id").whereRef("strips.upload_id", "=", "uploads.id"))),
+    )
+    .execute();
+}
+
+export async function deleteUpload(db: DbOrTx, id: string) {
+  await db.deleteFrom("uploads").where("id", "=", id).execute();
+}

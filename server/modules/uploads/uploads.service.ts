@@ -15,6 +15,7 @@ export type UploadPool = WorkerPool<UploadJob, UploadJobResult>;
 
 /** Tries per upload before a crash-looping photo is marked failed. */
 const MAX_ATTEMPTS = 3;
+export const DRAFT_DAYS = 7;
 
 const extensionOf: Record<string, string> = {
   "image/jpeg": "jpg",
@@ -161,6 +162,17 @@ export function createUploadsService(deps: { db: Db; store: FileStore; pool: Upl
         }
       }
       return rows.length;
+    },
+
+    /** Drafts (analysed photos never posted) are kept for a week, then removed with their files. */
+    async cleanupDrafts(now = new Date(), keepDays = DRAFT_DAYS) {
+      const cutoff = new Date(now.getTime() - keepDays * 24 * 60 * 60 * 1000).toISOString();
+      const stale = await repo.listStaleDrafts(db, cutoff);
+      for (const row of stale) {
+        await repo.deleteUpload(db, row.id);
+        await discardFiles(row);
+      }
+      return stale.length;
     },
 
     /** Waits for every analysis in flight (tests and shutdown). */

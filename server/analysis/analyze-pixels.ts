@@ -1,0 +1,110 @@
+// The strip analysis over plain pixels: paper white → corrected CIELAB → strip → profile →
+// bands and transitions → ink suggestions. Pure: no files, no sharp.
+import { deltaE2000, labToHex, type Lab } from "../../shared/colour/index";
+import { toCorrectedLab, type LabImage } from "./corrected-lab";
+import { findStrip, type StripGeometry } from "./find-strip";
+import { suggestInks } from "./match-inks";
+import { findPaperWhite, paperSrgb8, type PaperEstimate } from "./paper-white";
+import { collectSamples, robustLab, readProfile, type Profile } from "./read-profile";
+import { DEFAULT_SEGMENT_PARAMS, segmentProfile, type Segment, type SegmentParams } from "./segment-profile";
+import { srgbToLab } from "../../shared/colour/index";
+import type { AnalysisBand, AnalysisResult, CatalogueInk, RgbImage, WhitePoint } from "./types";
+
+export type AnalyzeOptions = {
+  catalogue: readonly CatalogueInk[];
+  stash?: ReadonlySet<number>;
+  white?: WhitePoint;
+  /** Overrides for the segmentation constants (for experiments; production uses the defaults). */
+  segment?: Partial<SegmentParams>;
+};
+
+/** Adjacent bands closer than this (ΔE2000) are one band read twice; ours, "barely different". */
+export const MERGE_BANDS_DE = 2;
+
+export type MeasuredBand = { from: number; to: number; lab: Lab; spread: number };
+
+export type StripMeasurement = {
+  paper: PaperEstimate;
+  geometry: StripGeometry;
+  profile: Profile;
+  bands: MeasuredBand[];
+  sigma: number;
+};
+
+const round = (v: number, d: number) => Math.round(v * 10 ** d) / 10 ** d;
+
+function checkWhite(white: WhitePoint | undefined): void {
+  if (white === undefined) return;
+  const ok = (v: unknown) => typeof v === "number" && Number.isFinite(v) && v >= 0 && v <= 1;
+  if (!ok(white.x) || !ok(white.y)) throw new RangeError("The white point must be given as fractions 0–1 of the photo's width and height.");
+}
+
+function measureBand(img: LabImage, g: StripGeometry, profile: Profile, seg: Segment): MeasuredBand {
+  const len = seg.to - seg.from;
+  const inset = len >= 5 ? Math.max(1, Math.round(0.1 * len)) : 0;
+  const step = g.length / profile.n;
+  const from = (seg.from + inset) * step;
+  const to = (seg.to - inset) * step;
+  const stepV = Math.max(1, (0.6 * g.thickness) / 41);
+  const stepU = Math.max(1, (to - from) / 200);
+  const lab3 = robustLab(collectSamples(img, g, from, Math.max(to, from + 1), stepU, stepV));
+  const lab: Lab = { l: lab3[0], a: lab3[1], b: lab3[2] };
+  const des: number[] = [];
+  for (let i = seg.from; i < seg.to; i++) {
+    des.push(deltaE2000(lab, { l: profile.lab[i * 3], a: profile.lab[i * 3 + 1], b: profile.lab[i * 3 + 2] }));
+  }
+  des.sort((a, b) => a - b);
+  const spread = des.length ? des[Math.min(des.length - 1, Math.floor(0.9 * des.length))] : 0;
+  return { from: seg.from, to: seg.to, lab, spread };
+}
+
+/** Finds and measures the strip; throws NoStripError when there is none. */
+export function measureStrip(img: RgbImage, opts: { white?: WhitePoint; segment?: Partial<SegmentParams> } = {}): StripMeasurement {
+  checkWhite(opts.white);
+  const paper = findPaperWhite(img, opts.white);
+  const labImg = toCorrectedLab(img, paper);
+  const geometry = findStrip(labImg);
+  const profile = readProfile(labImg, geometry);
+  const seg = segmentProfile(profile.lab, profile.n, { ...DEFAULT_SEGMENT_PARAMS, ...opts.segment });
+  let bands = seg.bands.map((s) => measureBand(labImg, geometry, profile, s));
+  // Merge neighbours that are the same colour (the DP may split one uneven band).
+  for (let k = 0; k + 1 < bands.length; ) {
+    if (deltaE2000(bands[k].lab, bands[k + 1].lab) < MERGE_BANDS_DE) {
+      const merged = measureBand(labImg, geometry, profile, { from: bands[k].from, to: bands[k + 1].to });
+      bands = [...bands.slice(0, k), merged, ...bands.slice(k + 2)];
+    } else k++;
+  }
+  return { paper, geometry, profile, bands, sigma: seg.sigma };
+}
+
+export function analyzePixels(img: RgbImage, opts: AnalyzeOptions): AnalysisResult {
+  const m = measureStrip(img, opts);
+  const n = m.profile.n;
+  const frac = (i: number) => round(i / n, 4);
+  const bands: AnalysisBand[] = m.bands.map((b, index) => {
+    const { suggestions, confidence } = suggestInks(b.lab, opts.catalogue, opts.stash);
+    return {
+      index,
+      start: index === 0 ? 0 : frac(b.from),
+      end: index === m.bands.length - 1 ? 1 : frac(b.to),
+      hex: labToHex(b.lab),
+      lab: { l: round(b.lab.l, 2), a: round(b.lab.a, 2), b: round(b.lab.b, 2) },
+      spread: round(b.spread, 2),
+      confidence,
+      suggestions,
+    };
+  });
+  const transitions = m.bands.slice(1).map((b, k) => ({ start: frac(m.bands[k].to), end: frac(b.from) }));
+  const [r, g, b] = paperSrgb8(m.paper);
+  const paperLab = srgbToLab(r, g, b);
+  return {
+    orientation: m.geometry.orientation,
+    paper: {
+      found: m.paper.found,
+      hex: labToHex(paperLab),
+      lab: { l: round(paperLab.l, 2), a: round(paperLab.a, 2), b: round(paperLab.b, 2) },
+    },
+    bands,
+    transitions,
+  };
+}

@@ -1,0 +1,52 @@
+import { Router } from "express";
+import { z } from "zod";
+import { stripIdParams, stripInput, stripListQuery, stripPatch } from "../../../shared/schemas/strips";
+import { requireUser } from "../../auth/current-user";
+import { validate } from "../../middleware/validate";
+import type { StripsService } from "./strips.service";
+
+const imageParams = z.strictObject({ id: stripIdParams.shape.id, variant: z.enum(["display", "thumb"]) });
+const memberParams = z.strictObject({ id: z.string().uuid() });
+
+export function stripsRouter(strips: StripsService): Router {
+  const router = Router();
+
+  router.get("/strips", validate({ query: stripListQuery }), async (req, res) => {
+    res.json(await strips.list(req.query as never));
+  });
+
+  router.post("/strips", requireUser, validate({ body: stripInput }), async (req, res) => {
+    res.status(201).json(await strips.create(res.locals.user!, req.body));
+  });
+
+  router.get("/strips/:id", validate({ params: stripIdParams }), async (req, res) => {
+    res.set("Cache-Control", "no-store").json(await strips.get(Number(req.params.id), res.locals.user));
+  });
+
+  router.get("/strips/:id/related", validate({ params: stripIdParams }), async (req, res) => {
+    res.json({ items: await strips.related(Number(req.params.id), res.locals.user) });
+  });
+
+  router.patch("/strips/:id", requireUser, validate({ params: stripIdParams, body: stripPatch }), async (req, res) => {
+    res.json(await strips.edit(Number(req.params.id), res.locals.user!, req.body));
+  });
+
+  router.delete("/strips/:id", requireUser, validate({ params: stripIdParams }), async (req, res) => {
+    await strips.remove(Number(req.params.id), res.locals.user!);
+    res.status(204).end();
+  });
+
+  router.get("/strips/:id/images/:variant", validate({ params: imageParams }), async (req, res) => {
+    const variant = req.params.variant as "display" | "thumb";
+    const image = await strips.imagePath(Number(req.params.id), variant, res.locals.user);
+    // Never let a shared cache keep an image that only its author and moderators may see.
+    res.set("Cache-Control", image.isPublic ? "public, max-age=300" : "private, no-store");
+    res.type("image/webp").sendFile(image.path);
+  });
+
+  router.get("/members/:id", validate({ params: memberParams }), async (req, res) => {
+    res.set("Cache-Control", "no-store").json(await strips.memberProfile(String(req.params.id), res.locals.user));
+  });
+
+  return router;
+}

@@ -1,0 +1,282 @@
+import type { z } from "zod";
+import { deltaE2000, type Lab } from "../../../shared/colour";
+import type { Me } from "../../../shared/schemas/accounts";
+import type { Analysis } from "../../../shared/schemas/uploads";
+import type { Strip, StripList, StripListQuery, stripInput, stripPatch, MemberProfile } from "../../../shared/schemas/strips";
+import { nowIso, type Db, type DbOrTx } from "../../db/client";
+import type { StripRow } from "../../db/schema";
+import { AppError, notFound } from "../../middleware/errors";
+import type { FileStore } from "../../storage/file-store";
+import { cleanNotes } from "./notes-html";
+import * as repo from "./strips.repository";
+import { decodeCursor, encodeCursor } from "./cursor";
+
+type StripInput = z.output<typeof stripInput>;
+type StripPatch = z.output<typeof stripPatch>;
+
+export const isModerator = (viewer: Me | null) => !!viewer && viewer.role !== "member";
+
+/** The one visibility rule: published strips for everyone, the rest for the author and moderators. */
+export function canViewStrip(strip: Pick<StripRow, "status" | "author_id">, viewer: Me | null) {
+  return strip.status === "published" || (!!viewer && (viewer.id === strip.author_id || isModerator(viewer)));
+}
+
+export function isSuspended(me: Me, now = new Date()) {
+  return !!me.suspendedUntil && new Date(me.suspendedUntil) > now;
+}
+
+function assertCanContribute(me: Me) {
+  if (isSuspended(me)) {
+    throw new AppError("suspended", `Your account is suspended until ${me.suspendedUntil?.slice(0, 10)}; you cannot post for now.`, 403);
+  }
+}
+
+export function stripImageUrl(id: number, variant: "display" | "thumb") {
+  return `/api/strips/${id}/images/${variant}`;
+}
+
+const round = (n: number) => Math.round(n * 100) / 100;
+
+function toStrips(rows: StripRow[], parts: Awaited<ReturnType<typeof repo.loadStripParts>>): Strip[] {
+  const names = new Map(parts.authors.map((a) => [a.user_id, a.name]));
+  const uploads = new Map(parts.uploads.map((u) => [u.id, u]));
+  return rows.map((s) => {
+    const up = uploads.get(s.upload_id);
+    return {
+      id: s.id,
+      title: s.title,
+      status: s.status,
+      statusReason: s.status_reason,
+      author: { id: s.author_id, name: names.get(s.author_id) ?? "A member" },
+      inks: parts.inks
+        .filter((i) => i.strip_id === s.id)
+        .map((i) => ({ id: i.id, name: i.name, brand: i.brand, hex: i.hex, lab: { l: i.lab_l, a: i.lab_a, b: i.lab_b } })),
+      bands: parts.bands
+        .filter((b) => b.strip_id === s.id)
+        .map((b) => ({
+          index: b.position,
+          start: b.start_frac,
+          end: b.end_frac,
+          hex: b.hex,
+          lab: { l: b.lab_l, a: b.lab_a, b: b.lab_b },
+          inkId: b.ink_id,
+          deltaE: b.delta_e,
+        })),
+      orientation: s.orientation,
+      images: {
+        display: stripImageUrl(s.id, "display"),
+        thumb: stripImageUrl(s.id, "thumb"),
+        placeholder: up?.placeholder ?? "",
+        width: up?.width ?? 0,
+        height: up?.height ?? 0,
+      },
+      paper: s.paper,
+      tools: JSON.parse(s.tools_json),
+      videoUrl: s.video_url,
+      notes: s.notes_html,
+      saves: s.saves,
+      version: s.version,
+      createdAt: s.created_at,
+      updatedAt: s.updated_at,
+      publishedAt: s.published_at,
+    };
+  });
+}
+
+export async function hydrate(db: DbOrTx, rows: StripRow[]) {
+  return toStrips(rows, await repo.loadStripParts(db, rows));
+}
+
+async function checkedInks(db: DbOrTx, ids: number[]) {
+  const found = await repo.findInksByIds(db, ids);
+  const known = new Set(found.map((i) => i.id));
+  const missing = ids.filter((id) => !known.has(id));
+  if (missing.length) {
+    throw new AppError("unknown_inks", "Some inks are not in the catalogue.", 422, {
+      inks: [`unknown ink id${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}`],
+    });
+  }
+  return ids.map((id) => found.find((i) => i.id === id)!);
+}
+
+/** Each measured band is tagged with the nearest of the member's inks (ΔE2000). */
+function tagBands(analysis: Analysis, inks: { id: number; lab_l: number; lab_a: number; lab_b: number }[]) {
+  return analysis.bands.map((band) => {
+    let best: { inkId: number; deltaE: number } | null = null;
+    for (const ink of inks) {
+      const de = deltaE2000(band.lab as Lab, { l: ink.lab_l, a: ink.lab_a, b: ink.lab_b });
+      if (!best || de < best.deltaE) best = { inkId: ink.id, deltaE: round(de) };
+    }
+    return { start: band.start, end: band.end, lab: band.lab, hex: band.hex, inkId: best?.inkId ?? null, deltaE: best?.deltaE ?? null };
+  });
+}
+
+export function createStripsService(deps: { db: Db; store: FileStore }) {
+  const { db, store } = deps;
+
+  async function getRow(id: number, viewer: Me | null) {
+    const row = await repo.findStrip(db, id);
+    if (!row || !canViewStrip(row, viewer)) throw notFound("That strip");
+    return row;
+  }
+
+  async function authorRow(id: number, me: Me, from: DbOrTx = db) {
+    const row = await repo.findStrip(from, id);
+    if (!row || !canViewStrip(row, me)) throw notFound("That strip");
+    if (row.author_id !== me.id) throw new AppError("forbidden", "Only the author can change this strip.", 403);
+    return row;
+  }
+
+  return {
+    async create(me: Me, input: StripInput) {
+      assertCanContribute(me);
+      const notes = cleanNotes(input.notes);
+      return db.transaction().execute(async (tx) => {
+        const upload = await tx.selectFrom("uploads").selectAll().where("id", "=", input.uploadId).executeTakeFirst();
+        if (!upload || upload.owner_id !== me.id) {
+          throw new AppError("unknown_upload", "That photo upload was not found.", 422, { uploadId: ["is not one of your uploads"] });
+        }
+        if (upload.status !== "ready" || !upload.analysis_json) {
+          const why = upload.status === "processing" ? "is still being analysed" : "could not be analysed; upload the photo again";
+          throw new AppError("upload_not_ready", `That photo ${why}.`, 422, { uploadId: [why] });
+        }
+        if (await repo.findStripByUpload(tx, upload.id)) {
+          throw new AppError("already_posted", "This photo is already posted as a strip.", 409, { uploadId: ["is already posted"] });
+        }
+        const inks = await checkedInks(tx, input.inks);
+        const analysis = JSON.parse(upload.analysis_json) as Analysis;
+        const now = nowIso();
+        const published = me.standing === "trusted";
+        const id = await repo.insertStrip(tx, {
+          author_id: me.id,
+          upload_id: upload.id,
+          title: input.title,
+          notes_html: notes,
+          paper: input.paper,
+          tools_json: JSON.stringify(input.tools),
+          video_url: input.videoUrl ?? null,
+          status: published ? "published" : "pending",
+          status_reason: null,
+          orientation: analysis.orientation,
+          ink_count: inks.length,
+          phash: upload.phash,
+          created_at: now,
+          updated_at: now,
+          published_at: published ? now : null,
+        });
+        await repo.replaceInks(tx, id, input.inks);
+        await repo.replaceBands(tx, id, tagBands(analysis, inks));
+        return { id, status: published ? ("published" as const) : ("pending" as const) };
+      });
+    },
+
+    async get(id: number, viewer: Me | null): Promise<Strip> {
+      const row = await getRow(id, viewer);
+      return (await hydrate(db, [row]))[0]!;
+    },
+
+    async list(q: StripListQuery): Promise<StripList> {
+      const after = q.cursor ? decodeCursor(q.cursor, q.sort) : undefined;
+      const rows = await repo.listStrips(db, {
+        inks: q.ink,
+        authorId: q.author,
+        statuses: ["published"],
+        sort: q.sort,
+        after,
+        limit: q.limit + 1,
+      });
+      const page = rows.slice(0, q.limit);
+      const last = page[page.length - 1];
+      const nextCursor = rows.length > q.limit && last ? encodeCursor(q.sort, last) : null;
+      return { items: await hydrate(db, page), nextCursor };
+    },
+
+    async related(id: number, viewer: Me | null, limit = 6): Promise<Strip[]> {
+      await getRow(id, viewer);
+      const ids = (await repo.relatedStripIds(db, id, limit)).map((r) => r.strip_id);
+      if (!ids.length) return [];
+      const rows = await db.selectFrom("strips").selectAll().where("id", "in", ids).execute();
+      const strips = await hydrate(db, rows);
+      return ids.map((sid) => strips.find((s) => s.id === sid)!).filter(Boolean);
+    },
+
+    async edit(id: number, me: Me, patch: StripPatch) {
+      assertCanContribute(me);
+      const notes = patch.notes !== undefined ? cleanNotes(patch.notes) : undefined;
+      return db.transaction().execute(async (tx) => {
+        const row = await authorRow(id, me, tx);
+        if (patch.expectedVersion !== undefined && patch.expectedVersion !== row.version) {
+          throw new AppError("stale_version", "This strip changed since you opened it. Reload to see the latest version.", 409);
+        }
+        if (row.status === "hidden" || row.status === "rejected") {
+          throw new AppError("locked", "A moderator has taken this strip down, so it cannot be edited. You can delete it.", 409);
+        }
+        // A non-trusted author's edit goes (back) to review; a returned strip is resubmitted.
+        const status: StripRow["status"] =
+          row.status === "returned" || (row.status === "published" && me.standing !== "trusted") ? "pending" : row.status;
+        const now = nowIso();
+        await repo.updateStrip(tx, id, {
+          ...(patch.title !== undefined && { title: patch.title }),
+          ...(notes !== undefined && { notes_html: notes }),
+          ...(patch.paper !== undefined && { paper: patch.paper }),
+          ...(patch.tools !== undefined && { tools_json: JSON.stringify(patch.tools) }),
+          ...(patch.videoUrl !== undefined && { video_url: patch.videoUrl || null }),
+          ...(patch.inks !== undefined && { ink_count: patch.inks.length }),
+          status,
+          status_reason: status === row.status ? row.status_reason : null,
+          version: row.version + 1,
+          updated_at: now,
+        });
+        if (patch.inks) {
+          const inks = await checkedInks(tx, patch.inks);
+          await repo.replaceInks(tx, id, patch.inks);
+          const upload = await tx.selectFrom("uploads").select("analysis_json").where("id", "=", row.upload_id).executeTakeFirst();
+          if (upload?.analysis_json) await repo.replaceBands(tx, id, tagBands(JSON.parse(upload.analysis_json), inks));
+        }
+        const updated = await repo.findStrip(tx, id);
+        return (await hydrate(tx, [updated!]))[0]!;
+      });
+    },
+
+    async remove(id: number, me: Me) {
+      const row = await authorRow(id, me);
+      const upload = await db.selectFrom("uploads").select(["id", "original_key"]).where("id", "=", row.upload_id).executeTakeFirst();
+      await db.transaction().execute(async (tx) => {
+        await repo.deleteStrip(tx, id);
+        await tx.deleteFrom("uploads").where("id", "=", row.upload_id).execute();
+      });
+      if (upload?.original_key) await store.remove(upload.original_key);
+      await store.removeFolder(`images/${row.upload_id}`);
+    },
+
+    /** Path of an image file, if the viewer may see the strip. */
+    async imagePath(id: number, variant: "display" | "thumb", viewer: Me | null) {
+      const row = await getRow(id, viewer);
+      const upload = await db.selectFrom("uploads").select(["display_key", "thumb_key"]).where("id", "=", row.upload_id).executeTakeFirst();
+      const key = variant === "display" ? upload?.display_key : upload?.thumb_key;
+      if (!key) throw notFound("That image");
+      return { path: store.pathOf(key), isPublic: row.status === "published" };
+    },
+
+    async memberProfile(memberId: string, viewer: Me | null): Promise<MemberProfile> {
+      const profile = await db.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
+      if (!profile) throw notFound("That member");
+      const self = viewer?.id === memberId || isModerator(viewer);
+      const rows = await repo.listStrips(db, {
+        authorId: memberId,
+        statuses: self ? ["pending", "published", "hidden", "returned", "rejected"] : ["published"],
+        sort: "newest",
+        limit: 200,
+      });
+      return {
+        id: profile.user_id,
+        name: profile.name,
+        bio: profile.bio,
+        standing: profile.standing,
+        joinedAt: profile.created_at,
+        strips: await hydrate(db, rows),
+      };
+    },
+  };
+}
+export type StripsService = ReturnType<typeof createStripsService>;

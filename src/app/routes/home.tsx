@@ -1,0 +1,59 @@
+import { ButtonLink } from "../../components/ui/button";
+import { DocumentTitle } from "../../components/ui/page-header";
+import { useMe } from "../../features/accounts/api/get-me";
+
+export default function HomePage() {
+  const { data: me, isPending } = useMe();
+  return (
+    <div className="flex flex-col gap-14">
+      <DocumentTitle title="" />
+      <section aria-labelledby="home-title" className="grid gap-8 md:grid-cols-[3fr_2fr] md:items-center">
+        <div className="space-y-5">
+          <p className="text-sm font-bold tracking-wide text-ink-muted uppercase">For card makers, scrapbookers and ink blenders</p>
+          <h1 id="home-title" className="text-4xl leading-[1.1] font-bold text-balance sm:text-5xl">
+            See how inks really blend, on paper, before you buy the next one.
+          </h1>
+          <p className="max-w-prose text-lg text-ink-soft">
+            Welcome to Blendwell. Crafters photograph their dried blended strips, name the inks in order, and share
+            them here, so everyone can find combinations that flow and inks they do not own yet.
+          </p>
+          <div className="flex flex-wrap gap-3">
+            <ButtonLink to="/inks">Browse the ink catalogue</ButtonLink>
+            {!isPending && !me && (
+              <ButtonLink to="/sign-in" variant="secondary">
+                Join or sign in
+              </ButtonLink>
+            )}
+          </div>
+        </div>
+        {/* An ornament in the shape of a strip; no real inks or post behind it. */}
+        <figure aria-hidden="true" className="rotate-[-2deg] rounded-lg border border-rule bg-card p-3 shadow-lifted">
+          <div className="blend-ornament h-20 rounded-sm sm:h-24" />
+          <div className="mt-2 flex justify-between gap-2 px-0.5">
+            {["#23506b", "#3f8593", "#e3c566", "#d9855b", "#8e4a6e"].map((c) => (
+              <span key={c} className="h-3 flex-1 rounded-full opacity-80" style={{ backgroundColor: c }} />
+            ))}
+          </div>
+        </figure>
+      </section>
+
+      <section aria-labelledby="newest-title" className="space-y-4">
+        <div className="flex items-end justify-between gap-4 border-b border-rule pb-3">
+          <h2 id="newest-title" className="text-2xl font-bold">
+            Newest strips
+          </h2>
+        </div>
+        <div className="rounded-xl border-2 border-dashed border-rule-strong bg-card/60 px-5 py-10 text-center sm:px-10">
+          <p className="text-xl font-bold">Strips arrive soon</p>
+          <p className="mx-auto mt-2 max-w-prose text-ink-soft">
+            The gallery opens once posting is ready: each strip will show here as a wide band with its inks, in order,
+            underneath. Until then, the ink catalogue is open to browse.
+          </p>
+          <ButtonLink to="/inks" variant="quiet" className="mt-4">
+            Look through the inks <span aria-hidden="true">→</span>
+          </ButtonLink>
+        </div>
+      </section>
+    </div>
+  );
+}

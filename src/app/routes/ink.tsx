@@ -1,0 +1,142 @@
+import { useState } from "react";
+import { Link, useParams } from "react-router";
+import { Button } from "../../components/ui/button";
+import { Card } from "../../components/ui/card";
+import { Loading } from "../../components/ui/loading";
+import { Notice } from "../../components/ui/notice";
+import { DocumentTitle } from "../../components/ui/page-header";
+import { toast } from "../../components/ui/toast";
+import { useMe } from "../../features/accounts/api/get-me";
+import { useBrands } from "../../features/inks/api/get-brands";
+import { useInk } from "../../features/inks/api/get-ink";
+import { useUpdateInk } from "../../features/inks/api/update-ink";
+import { colourWords } from "../../features/inks/colour-words";
+import { InkColourFacts } from "../../features/inks/components/ink-colour-facts";
+import { InkForm } from "../../features/inks/components/ink-form";
+import { InkSwatch } from "../../features/inks/components/ink-swatch";
+import { DiscontinuedBadge, InkTypeBadge } from "../../features/inks/components/ink-type-badge";
+import type { Ink } from "../../../shared/schemas/inks";
+import { errorMessage, isApiError } from "../../lib/api-client";
+import { formatDate } from "../../lib/format";
+import { canModerate } from "../../lib/roles";
+import NotFoundPage from "./not-found";
+
+function parseId(raw: string | undefined): number | null {
+  if (!raw || !/^[1-9]\d{0,15}$/.test(raw)) return null;
+  const id = Number(raw);
+  return Number.isSafeInteger(id) ? id : null;
+}
+
+function EditInk({ ink, onDone }: { ink: Ink; onDone: () => void }) {
+  const brands = useBrands();
+  const updateInk = useUpdateInk(ink.id);
+  if (brands.isPending) return <Loading label="Loading brands…" />;
+  if (brands.isError)
+    return (
+      <Notice tone="error" title="Brands could not be loaded" live>
+        <p>{errorMessage(brands.error)}</p>
+      </Notice>
+    );
+  return (
+    <InkForm
+      ink={ink}
+      brands={brands.data}
+      submitLabel="Save changes"
+      busyLabel="Saving…"
+      onCancel={onDone}
+      onSubmit={async (_values, changes) => {
+        const saved = await updateInk.mutateAsync(changes);
+        toast.success(`${saved.name} is saved.`);
+        onDone();
+      }}
+    />
+  );
+}
+
+export default function InkPage() {
+  const id = parseId(useParams().id);
+  if (id === null) return <NotFoundPage />;
+  return <InkDetail id={id} />;
+}
+
+function InkDetail({ id }: { id: number }) {
+  const ink = useInk(id);
+  const { data: me } = useMe();
+  const [editing, setEditing] = useState(false);
+
+  if (ink.isPending) return <Loading label="Loading the ink…" />;
+  if (ink.isError) {
+    if (isApiError(ink.error) && ink.error.status === 404) return <NotFoundPage what="ink" />;
+    return (
+      <>
+        <DocumentTitle title="Ink" />
+        <Notice tone="error" title="This ink could not be loaded" live>
+          <p>{errorMessage(ink.error)}</p>
+          <Button variant="secondary" className="mt-3" onClick={() => void ink.refetch()}>
+            Try again
+          </Button>
+        </Notice>
+      </>
+    );
+  }
+
+  const data = ink.data;
+  const words = colourWords(data.lab);
+  return (
+    <article aria-labelledby="ink-title" className="flex flex-col gap-8">
+      <DocumentTitle title={`${data.name} · ${data.brand.name}`} />
+      <nav aria-label="Breadcrumb" className="text-ink-soft">
+        <Link to="/inks" className="inline-flex min-h-11 items-center font-bold text-accent hover:underline">
+          <span aria-hidden="true">←</span>&nbsp;Ink catalogue
+        </Link>
+      </nav>
+
+      <div className="overflow-hidden rounded-xl border border-rule bg-card p-3 shadow-card sm:p-4">
+        <InkSwatch hex={data.hex} className="h-36 w-full sm:h-48" />
+      </div>
+
+      <header className="flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
+        <div className="space-y-2">
+          <p className="text-lg text-ink-soft">{data.brand.name}</p>
+          <h1 id="ink-title" className="text-3xl leading-tight font-bold sm:text-4xl">
+            {data.name}
+          </h1>
+          <p className="flex flex-wrap items-center gap-2">
+            <InkTypeBadge type={data.type} />
+            {data.discontinued && <DiscontinuedBadge />}
+            <span className="text-ink-soft">{words}</span>
+          </p>
+        </div>
+        {canModerate(me?.role) && !editing && (
+          <Button variant="secondary" className="self-start sm:self-auto" onClick={() => setEditing(true)}>
+            Edit ink
+          </Button>
+        )}
+      </header>
+
+      {data.discontinued && (
+        <Notice tone="warning" title="Discontinued">
+          The maker no longer sells this ink. It stays in the catalogue so older strips keep their names.
+        </Notice>
+      )}
+
+      {editing ? (
+        <Card>
+          <h2 className="mb-5 text-2xl font-bold">Edit ink</h2>
+          <EditInk ink={data} onDone={() => setEditing(false)} />
+        </Card>
+      ) : (
+        <section aria-labelledby="ink-colour" className="space-y-3">
+          <h2 id="ink-colour" className="text-xl font-bold">
+            Reference colour
+          </h2>
+          <InkColourFacts ink={data} />
+          <p className="text-sm text-ink-muted">
+            CIELAB under D65 light. The screen swatch is the nearest sRGB colour; your screen and the ink on paper will
+            differ a little. Updated {formatDate(data.updatedAt)}.
+          </p>
+        </section>
+      )}
+    </article>
+  );
+}

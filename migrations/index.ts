@@ -3,6 +3,7 @@ import * as m0001 from "./20261202_0001_accounts";
 import * as m0002 from "./20261202_0002_catalogue";
 import * as m0003 from "./20261202_0003_uploads";
 import * as m0004 from "./20261202_0004_strips";
+import * as m0005 from "./20261202_0005_moderation";
 
 // Every migration, by name (the names sort in the order they run). Add new files here;
 // never edit one that has run.
@@ -11,4 +12,5 @@ export const migrations: Record<string, Migration> = {
   "20261202_0002_catalogue": m0002,
   "20261202_0003_uploads": m0003,
   "20261202_0004_strips": m0004,
+  "20261202_0005_moderation": m0005,
 };

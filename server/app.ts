@@ -16,6 +16,7 @@ import { sameOrigin } from "./middleware/same-origin";
 import { accountsRouter } from "./modules/accounts/accounts.router";
 import { devMailRouter } from "./modules/dev/dev-mail.router";
 import { inksRouter } from "./modules/inks/inks.router";
+import { moderationRouter } from "./modules/moderation/moderation.router";
 import { stripsRouter } from "./modules/strips/strips.router";
 import { uploadsRouter } from "./modules/uploads/uploads.router";
 import type { Services } from "./services";
@@ -25,7 +26,7 @@ export type AppDeps = {
   config: AppConfig;
   mailer: Mailer;
   logger: Logger;
-  services: Pick<Services, "store" | "uploads" | "strips">;
+  services: Pick<Services, "store" | "uploads" | "strips" | "moderation">;
   /** In development: Vite's middleware instead of the built client. */
   clientMiddleware?: RequestHandler;
   /** Folder of the built client (default ./dist). */
@@ -83,6 +84,7 @@ export function createApp(deps: AppDeps) {
   api.use(inksRouter(db));
   api.use(uploadsRouter(deps.services));
   api.use(stripsRouter(deps.services.strips));
+  api.use(moderationRouter(deps.services.moderation));
   if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);
   app.use("/api", api);

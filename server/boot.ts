@@ -8,6 +8,7 @@ import { migrateToLatest } from "./db/migrate";
 import { databaseIsEmpty, demoSignInsText, seedDemo } from "./demo/seed";
 import { startLocalSmtp, type LocalSmtp } from "./mail/local-smtp";
 import { createMailer } from "./mail/mailer";
+import { createOutbox } from "./mail/outbox";
 import { createServices } from "./services";
 
 export type Running = { server: Server; url: string; close(): Promise<void> };
@@ -43,6 +44,8 @@ export async function boot(
   await cleanup();
   const cleanupTimer = setInterval(() => void cleanup().catch((err) => logger.error({ err }, "draft cleanup failed")), 60 * 60 * 1000);
   cleanupTimer.unref();
+  const outbox = createOutbox({ db, mailer, logger });
+  outbox.start();
   const app = createApp({ db, config, mailer, logger, services, clientMiddleware: opts.clientMiddleware });
   const server = await new Promise<Server>((resolve, reject) => {
     const s = app.listen(config.port, (err?: Error) => (err ? reject(err) : resolve(s)));
@@ -55,6 +58,7 @@ export async function boot(
     async close() {
       clearInterval(cleanupTimer);
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      await outbox.stop();
       await services.close();
       mailer.close();
       await smtp?.close();

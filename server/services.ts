@@ -4,6 +4,7 @@ import type { AppConfig } from "./config";
 import type { Db } from "./db/client";
 import { createWorkerPool } from "./jobs/worker-pool";
 import type { UploadJob, UploadJobResult } from "./modules/uploads/upload-job";
+import { createModerationService } from "./modules/moderation/moderation.service";
 import { createStripsService } from "./modules/strips/strips.service";
 import { createUploadsService } from "./modules/uploads/uploads.service";
 import { createLocalFileStore } from "./storage/file-store";
@@ -20,10 +21,12 @@ export function createServices(deps: { db: Db; config: AppConfig; logger: Logger
   });
   const uploads = createUploadsService({ db: deps.db, store, pool, logger: deps.logger });
   const strips = createStripsService({ db: deps.db, store });
+  const moderation = createModerationService({ db: deps.db, appUrl: deps.config.appUrl });
   return {
     store,
     uploads,
     strips,
+    moderation,
     async close() {
       await uploads.idle();
       await pool.close();

@@ -117,6 +117,9 @@ export interface StripTable {
   created_at: string;
   updated_at: string;
   published_at: string | null;
+  /** Held out of public view until a moderator decides: "reports" or "duplicate". */
+  hold: "reports" | "duplicate" | null;
+  duplicate_of: number | null;
 }
 
 export interface StripInkTable {
@@ -138,6 +141,54 @@ export interface StripBandTable {
   delta_e: number | null;
 }
 
+export interface ModerationActionTable {
+  id: Generated<number>;
+  moderator_id: string | null;
+  action: string;
+  strip_id: number | null;
+  member_id: string | null;
+  reason: string;
+  note: string;
+  before_state: string | null;
+  after_state: string | null;
+  detail_json: string | null;
+  created_at: string;
+}
+
+export interface ReportTable {
+  id: Generated<number>;
+  strip_id: number;
+  reporter_id: string;
+  reason: string;
+  note: string;
+  status: Generated<"open" | "handled">;
+  created_at: string;
+  handled_at: string | null;
+}
+
+export interface NoticeTable {
+  id: Generated<number>;
+  user_id: string;
+  kind: string;
+  strip_id: number | null;
+  title: string;
+  body: string;
+  created_at: string;
+  read_at: string | null;
+}
+
+export interface MailOutboxTable {
+  id: Generated<number>;
+  to_address: string;
+  subject: string;
+  text: string;
+  attempts: Generated<number>;
+  next_attempt_at: string;
+  sent_at: string | null;
+  last_error: string | null;
+  created_at: string;
+}
+
 export interface Database {
   User: UserTable;
   Account: AccountTable;
@@ -151,6 +202,10 @@ export interface Database {
   strips: StripTable;
   strip_inks: StripInkTable;
   strip_bands: StripBandTable;
+  moderation_actions: ModerationActionTable;
+  reports: ReportTable;
+  notices: NoticeTable;
+  mail_outbox: MailOutboxTable;
 }
 
 export type Profile = Selectable<ProfileTable>;

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Ink } from "../../shared/schemas/inks";
 import type { Strip } from "../../shared/schemas/strips";
 import { createTestApp, DEMO, signedIn, type TestApp } from "../setup/test-app";
-import { stripPhoto } from "../setup/strip-photo";
+import { stripPhoto, variedStripPhoto } from "../setup/strip-photo";
 
 type Agent = ReturnType<TestApp["client"]>;
 let t: TestApp;
@@ -13,7 +13,7 @@ let inks: Ink[];
 let mara: Agent;
 let noor: Agent;
 let ivo: Agent;
-let photo: Buffer;
+let photos = 0;
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -21,7 +21,6 @@ beforeAll(async () => {
   mara = await signedIn(t, DEMO.member);
   noor = await signedIn(t, DEMO.newMember);
   ivo = await signedIn(t, DEMO.moderator);
-  photo = (await stripPhoto([ink("Deep Sounding"), ink("Gorse Bloom"), ink("Garnet Vein")])).jpeg;
 });
 afterAll(() => t.close());
 
@@ -31,8 +30,10 @@ function ink(name: string) {
   return found;
 }
 
+/** A fresh, different photo each time (the same photo twice would be held as a duplicate). */
 async function readyUpload(agent: Agent) {
-  const { body } = await agent.post("/api/uploads").attach("image", photo, "strip.jpg").expect(202);
+  const { jpeg } = await variedStripPhoto(photos++, [ink("Deep Sounding"), ink("Gorse Bloom"), ink("Garnet Vein")]);
+  const { body } = await agent.post("/api/uploads").attach("image", jpeg, "strip.jpg").expect(202);
   await t.services.uploads.idle();
   const upload = (await agent.get(`/api/uploads/${body.id}`).expect(200)).body;
   expect(upload.status).toBe("ready");
@@ -69,6 +70,19 @@ describe("posting a strip", () => {
     const img = await request(t.app).get(item.images.thumb).expect(200);
     expect(img.headers["content-type"]).toBe("image/webp");
     expect(img.headers["cache-control"]).toMatch(/public/);
+  });
+
+  it("the same photo posted again is held for review as a possible duplicate, even from a trusted member", async () => {
+    const { jpeg } = await stripPhoto([ink("Deep Sounding"), ink("Gorse Bloom"), ink("Garnet Vein")], { seed: 999, tiltDeg: -7 });
+    const first = (await mara.post("/api/uploads").attach("image", jpeg, "a.jpg").expect(202)).body.id;
+    const again = (await mara.post("/api/uploads").attach("image", jpeg, "b.jpg").expect(202)).body.id;
+    await t.services.uploads.idle();
+    const original = await post(mara, first).expect(201);
+    expect(original.body.status).toBe("published");
+    const copy = await post(mara, again).expect(201);
+    expect(copy.body.status).toBe("pending");
+    const row = await t.db.selectFrom("strips").select(["hold", "duplicate_of"]).where("id", "=", copy.body.id).executeTakeFirstOrThrow();
+    expect(row).toEqual({ hold: "duplicate", duplicate_of: original.body.id });
   });
 
   it("a new member's strip waits for review: only the author and moderators can see it or its photo", async () => {

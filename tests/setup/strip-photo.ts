@@ -46,3 +46,20 @@ export async function blankPaperPhoto() {
   };
   return sceneToJpeg(renderScene(spec), 90);
 }
+
+/**
+ * The n-th of a series of different-looking photos of the same inks (layout, tilt and framing
+ * change), so that posting several does not trip the duplicate-photo check.
+ */
+export function variedStripPhoto(n: number, inks: Pick<Ink, "id" | "lab">[]) {
+  const order = n % 2 === 0 ? inks : [...inks].reverse();
+  return stripPhoto(order, {
+    seed: 100 + n,
+    tiltDeg: -12 + ((n * 5) % 25),
+    lengthShare: 0.6 + (n % 4) * 0.06,
+    offset: [((n % 3) - 1) * 0.05, ((n % 2) - 0.5) * 0.08],
+    orientation: n % 5 === 4 ? "vertical" : "horizontal",
+    width: n % 5 === 4 ? 800 : 1200,
+    height: n % 5 === 4 ? 1200 : 800,
+  });
+}

@@ -13,6 +13,7 @@ import { migrateToLatest } from "../../server/db/migrate";
 import { seedDemo } from "../../server/demo/seed";
 import { readCapturedMail, startLocalSmtp, type LocalSmtp } from "../../server/mail/local-smtp";
 import { createMailer } from "../../server/mail/mailer";
+import { createOutbox, type Outbox } from "../../server/mail/outbox";
 import { createServices, type Services } from "../../server/services";
 
 export const ORIGIN = "http://localhost:3000";
@@ -24,6 +25,8 @@ export type TestApp = {
   config: AppConfig;
   smtp: LocalSmtp;
   services: Services;
+  /** Sends queued notice mail now (the app runs this on a timer). */
+  outbox: Outbox;
   /** A fresh cookie-keeping client that sends our Origin on every request. */
   client(): TestAgent;
   mail(): ReturnType<typeof readCapturedMail>;
@@ -49,6 +52,7 @@ export async function createTestApp(
   const mailer = createMailer({ host: smtp.host, port: smtp.port }, config.mailFrom);
   const logger = pino({ level: "silent" });
   const services = createServices({ db, config, logger, maxThreads: 1, ...opts.services });
+  const outbox = createOutbox({ db, mailer, logger });
   const app = createApp({ db, config, mailer, logger, services }).listen(0, "127.0.0.1");
   await once(app, "listening");
   return {
@@ -57,6 +61,7 @@ export async function createTestApp(
     config,
     smtp,
     services,
+    outbox,
     client: () => request.agent(app).set("Origin", ORIGIN),
     mail: () => readCapturedMail(dataDir),
     async close() {

@@ -149,3 +149,8 @@ export function relatedStripIds(db: DbOrTx, stripId: number, limit: number) {
     .limit(limit)
     .execute();
 }
+
+/** Perceptual hashes of other strips, for duplicate checks (a scan: fine at one machine's scale). */
+export function listPhashes(db: DbOrTx) {
+  return db.selectFrom("strips").select(["id", "phash"]).where("phash", "is not", null).execute();
+}

@@ -2,6 +2,7 @@ import { Router } from "express";
 import { z } from "zod";
 import { stripIdParams, stripInput, stripListQuery, stripPatch } from "../../../shared/schemas/strips";
 import { requireUser } from "../../auth/current-user";
+import { memberLimit } from "../../middleware/member-limits";
 import { validate } from "../../middleware/validate";
 import type { StripsService } from "./strips.service";
 
@@ -15,7 +16,9 @@ export function stripsRouter(strips: StripsService): Router {
     res.json(await strips.list(req.query as never));
   });
 
-  router.post("/strips", requireUser, validate({ body: stripInput }), async (req, res) => {
+  const postLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 10, trusted: 60, message: "You have posted many strips in the last hour. Please wait a while." });
+
+  router.post("/strips", requireUser, postLimit, validate({ body: stripInput }), async (req, res) => {
     res.status(201).json(await strips.create(res.locals.user!, req.body));
   });
 

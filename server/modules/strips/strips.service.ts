@@ -7,6 +7,7 @@ import { nowIso, type Db, type DbOrTx } from "../../db/client";
 import type { StripRow } from "../../db/schema";
 import { AppError, notFound } from "../../middleware/errors";
 import type { FileStore } from "../../storage/file-store";
+import { phashDistance } from "../../images";
 import { cleanNotes } from "./notes-html";
 import * as repo from "./strips.repository";
 import { decodeCursor, encodeCursor } from "./cursor";
@@ -29,6 +30,17 @@ function assertCanContribute(me: Me) {
   if (isSuspended(me)) {
     throw new AppError("suspended", `Your account is suspended until ${me.suspendedUntil?.slice(0, 10)}; you cannot post for now.`, 403);
   }
+}
+
+/** Hashes at most this many bits apart are the same photo, re-encoded or lightly edited (ours). */
+export const DUPLICATE_BITS = 6;
+
+async function findDuplicate(db: DbOrTx, phash: string | null) {
+  if (!phash) return null;
+  for (const other of await repo.listPhashes(db)) {
+    if (other.phash && other.phash.length === phash.length && phashDistance(other.phash, phash) <= DUPLICATE_BITS) return other.id;
+  }
+  return null;
 }
 
 export function stripImageUrl(id: number, variant: "display" | "thumb") {
@@ -100,7 +112,7 @@ async function checkedInks(db: DbOrTx, ids: number[]) {
 }
 
 /** Each measured band is tagged with the nearest of the member's inks (ΔE2000). */
-function tagBands(analysis: Analysis, inks: { id: number; lab_l: number; lab_a: number; lab_b: number }[]) {
+export function tagBands(analysis: Analysis, inks: { id: number; lab_l: number; lab_a: number; lab_b: number }[]) {
   return analysis.bands.map((band) => {
     let best: { inkId: number; deltaE: number } | null = null;
     for (const ink of inks) {
@@ -146,7 +158,9 @@ export function createStripsService(deps: { db: Db; store: FileStore }) {
         const inks = await checkedInks(tx, input.inks);
         const analysis = JSON.parse(upload.analysis_json) as Analysis;
         const now = nowIso();
-        const published = me.standing === "trusted";
+        // A photo that looks like another strip's waits for a moderator, whoever posts it.
+        const duplicateOf = await findDuplicate(tx, upload.phash);
+        const published = me.standing === "trusted" && duplicateOf === null;
         const id = await repo.insertStrip(tx, {
           author_id: me.id,
           upload_id: upload.id,
@@ -163,6 +177,8 @@ export function createStripsService(deps: { db: Db; store: FileStore }) {
           created_at: now,
           updated_at: now,
           published_at: published ? now : null,
+          hold: duplicateOf === null ? null : "duplicate",
+          duplicate_of: duplicateOf,
         });
         await repo.replaceInks(tx, id, input.inks);
         await repo.replaceBands(tx, id, tagBands(analysis, inks));

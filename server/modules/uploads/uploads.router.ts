@@ -7,6 +7,7 @@ import { reanalyseInput, uploadFields, uploadIdParams } from "../../../shared/sc
 import { requireUser } from "../../auth/current-user";
 import { DEFAULT_MAX_BYTES, DEFAULT_MAX_PIXELS, ImageError, readHeaderInfo, sniffImageBytes } from "../../images";
 import { AppError, fieldsFromZod, notFound } from "../../middleware/errors";
+import { memberLimit } from "../../middleware/member-limits";
 import { validate } from "../../middleware/validate";
 import type { FileStore } from "../../storage/file-store";
 import { toUpload, type UploadsService } from "./uploads.service";
@@ -64,9 +65,12 @@ export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore 
     limits: { fileSize: DEFAULT_MAX_BYTES, files: 1, fields: 4, parts: 5, fieldSize: 1024 },
   }).single("image");
 
+  const uploadLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 20, trusted: 120, message: "You have uploaded many photos in the last hour. Please wait a while." });
+
   router.post(
     "/uploads",
     requireUser,
+    uploadLimit,
     (_req, res, next) => {
       if (uploads.isBusy()) {
         res.set("Retry-After", "30");

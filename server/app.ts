@@ -82,9 +82,10 @@ export function createApp(deps: AppDeps) {
   });
   api.use(accountsRouter(db));
   api.use(inksRouter(db));
-  api.use(uploadsRouter(deps.services));
-  api.use(stripsRouter(deps.services.strips));
-  api.use(moderationRouter(deps.services.moderation));
+  const scale = config.rateLimits.memberScale;
+  api.use(uploadsRouter({ ...deps.services, limitScale: scale }));
+  api.use(stripsRouter(deps.services.strips, scale));
+  api.use(moderationRouter(deps.services.moderation, scale));
   if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);
   app.use("/api", api);

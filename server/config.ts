@@ -10,6 +10,8 @@ export type RateLimitConfig = {
   /** Sign-in e-mails per IP per window. */
   mailPerIp: number;
   windowMs: number;
+  /** Multiplies the per-member limits on uploads, posts and reports. */
+  memberScale: number;
 };
 
 export type AppConfig = {
@@ -79,6 +81,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, opts: { dev?: b
       mailPerAddress: 5 * scale,
       mailPerIp: 20 * scale,
       windowMs: 10 * 60 * 1000,
+      memberScale: scale,
     },
   };
 }

@@ -44,7 +44,7 @@ export async function createTestApp(
 ): Promise<TestApp> {
   const dataDir = mkdtempSync(path.join(os.tmpdir(), "blendwell-test-"));
   const base = loadConfig({ DATA_DIR: dataDir, NODE_ENV: "test", APP_URL: ORIGIN, ...opts.env });
-  const config: AppConfig = { ...base, rateLimits: { ...base.rateLimits, signInPerIp: 1000, mailPerIp: 1000, mailPerAddress: 1000, ...opts.limits } };
+  const config: AppConfig = { ...base, rateLimits: { ...base.rateLimits, signInPerIp: 1000, mailPerIp: 1000, mailPerAddress: 1000, memberScale: 100, ...opts.limits } };
   const db = openDatabase(config.dbFile);
   await migrateToLatest(db);
   if (opts.seed !== false) await seedDemo(db);

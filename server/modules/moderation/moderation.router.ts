@@ -18,9 +18,9 @@ import type { ModerationService } from "./moderation.service";
 
 const memberParams = z.strictObject({ id: z.string().uuid("is not a member id") });
 
-export function moderationRouter(moderation: ModerationService): Router {
+export function moderationRouter(moderation: ModerationService, limitScale = 1): Router {
   const router = Router();
-  const reportLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 5, trusted: 20, message: "You have sent many reports in the last hour. Please wait a while." });
+  const reportLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 5, trusted: 20, message: "You have sent many reports in the last hour. Please wait a while.", scale: limitScale });
 
   router.get("/review-queue", requireRole("moderator"), async (_req, res) => {
     res.set("Cache-Control", "no-store").json({ items: await moderation.queue() });

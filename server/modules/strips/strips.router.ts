@@ -9,14 +9,14 @@ import type { StripsService } from "./strips.service";
 const imageParams = z.strictObject({ id: stripIdParams.shape.id, variant: z.enum(["display", "thumb"]) });
 const memberParams = z.strictObject({ id: z.string().uuid() });
 
-export function stripsRouter(strips: StripsService): Router {
+export function stripsRouter(strips: StripsService, limitScale = 1): Router {
   const router = Router();
 
   router.get("/strips", validate({ query: stripListQuery }), async (req, res) => {
     res.json(await strips.list(req.query as never));
   });
 
-  const postLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 10, trusted: 60, message: "You have posted many strips in the last hour. Please wait a while." });
+  const postLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 10, trusted: 60, message: "You have posted many strips in the last hour. Please wait a while.", scale: limitScale });
 
   router.post("/strips", requireUser, postLimit, validate({ body: stripInput }), async (req, res) => {
     res.status(201).json(await strips.create(res.locals.user!, req.body));

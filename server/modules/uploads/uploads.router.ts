@@ -53,7 +53,7 @@ async function checkPhoto(file: string) {
   }
 }
 
-export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore }): Router {
+export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore; limitScale?: number }): Router {
   const { uploads, store } = deps;
   const router = Router();
   mkdirSync(store.tmpDir, { recursive: true });
@@ -65,7 +65,7 @@ export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore 
     limits: { fileSize: DEFAULT_MAX_BYTES, files: 1, fields: 4, parts: 5, fieldSize: 1024 },
   }).single("image");
 
-  const uploadLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 20, trusted: 120, message: "You have uploaded many photos in the last hour. Please wait a while." });
+  const uploadLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 20, trusted: 120, message: "You have uploaded many photos in the last hour. Please wait a while.", scale: deps.limitScale });
 
   router.post(
     "/uploads",

@@ -4,6 +4,8 @@ import * as m0002 from "./20261202_0002_catalogue";
 import * as m0003 from "./20261202_0003_uploads";
 import * as m0004 from "./20261202_0004_strips";
 import * as m0005 from "./20261202_0005_moderation";
+import * as m0006 from "./20261202_0006_search_index";
+import * as m0007 from "./20261202_0007_binders_and_stash";
 
 // Every migration, by name (the names sort in the order they run). Add new files here;
 // never edit one that has run.
@@ -13,4 +15,6 @@ export const migrations: Record<string, Migration> = {
   "20261202_0003_uploads": m0003,
   "20261202_0004_strips": m0004,
   "20261202_0005_moderation": m0005,
+  "20261202_0006_search_index": m0006,
+  "20261202_0007_binders_and_stash": m0007,
 };

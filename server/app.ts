@@ -16,7 +16,9 @@ import { sameOrigin } from "./middleware/same-origin";
 import { accountsRouter } from "./modules/accounts/accounts.router";
 import { devMailRouter } from "./modules/dev/dev-mail.router";
 import { inksRouter } from "./modules/inks/inks.router";
+import { bindersRouter } from "./modules/binders/binders.router";
 import { moderationRouter } from "./modules/moderation/moderation.router";
+import { stashRouter } from "./modules/stash/stash.router";
 import { stripsRouter } from "./modules/strips/strips.router";
 import { uploadsRouter } from "./modules/uploads/uploads.router";
 import type { Services } from "./services";
@@ -26,7 +28,7 @@ export type AppDeps = {
   config: AppConfig;
   mailer: Mailer;
   logger: Logger;
-  services: Pick<Services, "store" | "uploads" | "strips" | "moderation">;
+  services: Pick<Services, "store" | "uploads" | "strips" | "moderation" | "binders" | "stash">;
   /** In development: Vite's middleware instead of the built client. */
   clientMiddleware?: RequestHandler;
   /** Folder of the built client (default ./dist). */
@@ -86,6 +88,8 @@ export function createApp(deps: AppDeps) {
   api.use(uploadsRouter({ ...deps.services, limitScale: scale }));
   api.use(stripsRouter(deps.services.strips, scale));
   api.use(moderationRouter(deps.services.moderation, scale));
+  api.use(bindersRouter(deps.services.binders));
+  api.use(stashRouter(deps.services.stash));
   if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);
   app.use("/api", api);

@@ -4,7 +4,9 @@ import type { AppConfig } from "./config";
 import type { Db } from "./db/client";
 import { createWorkerPool } from "./jobs/worker-pool";
 import type { UploadJob, UploadJobResult } from "./modules/uploads/upload-job";
+import { createBindersService } from "./modules/binders/binders.service";
 import { createModerationService } from "./modules/moderation/moderation.service";
+import { createStashService } from "./modules/stash/stash.service";
 import { createStripsService } from "./modules/strips/strips.service";
 import { createUploadsService } from "./modules/uploads/uploads.service";
 import { createLocalFileStore } from "./storage/file-store";
@@ -27,6 +29,8 @@ export function createServices(deps: { db: Db; config: AppConfig; logger: Logger
     uploads,
     strips,
     moderation,
+    binders: createBindersService({ db: deps.db }),
+    stash: createStashService({ db: deps.db }),
     async close() {
       await uploads.idle();
       await pool.close();

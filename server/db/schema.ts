@@ -189,6 +189,31 @@ export interface MailOutboxTable {
   created_at: string;
 }
 
+export interface BinderTable {
+  id: Generated<number>;
+  owner_id: string;
+  name: string;
+  description: string;
+  visibility: "private" | "public";
+  created_at: string;
+  updated_at: string;
+}
+
+export interface BinderItemTable {
+  binder_id: number;
+  strip_id: number;
+  position: number;
+  note: string;
+  added_at: string;
+}
+
+export interface StashItemTable {
+  user_id: string;
+  ink_id: number;
+  running_low: 0 | 1;
+  added_at: string;
+}
+
 export interface Database {
   User: UserTable;
   Account: AccountTable;
@@ -206,6 +231,9 @@ export interface Database {
   reports: ReportTable;
   notices: NoticeTable;
   mail_outbox: MailOutboxTable;
+  binders: BinderTable;
+  binder_items: BinderItemTable;
+  stash_items: StashItemTable;
 }
 
 export type Profile = Selectable<ProfileTable>;

@@ -8,6 +8,7 @@ import type { UploadRow } from "../../db/schema";
 import type { WorkerPool } from "../../jobs/worker-pool";
 import { AppError, notFound } from "../../middleware/errors";
 import type { FileStore } from "../../storage/file-store";
+import { stashInkIds } from "../stash/stash.service";
 import * as repo from "./uploads.repository";
 import type { UploadJob, UploadJobResult } from "./upload-job";
 
@@ -63,7 +64,8 @@ export function createUploadsService(deps: { db: Db; store: FileStore; pool: Upl
         originalPath: store.pathOf(row.original_key),
         outDir: store.pathOf(`images/${id}`),
         catalogue: await repo.loadCatalogue(db),
-        stash: [],
+        // Suggestions prefer the member's own inks on near-ties.
+        stash: await stashInkIds(db, row.owner_id),
         white,
       });
     } catch (err) {

@@ -37,7 +37,8 @@ export default defineConfig({
     command: "npx tsx server/index.ts",
     url: `http://localhost:${port}/api/health`,
     reuseExistingServer: false,
-    timeout: 60_000,
+    // The first start posts the demo strips through the real analysis.
+    timeout: 240_000,
     stdout: "ignore",
     stderr: "pipe",
     env: {

@@ -6,6 +6,7 @@ import type { AppConfig } from "./config";
 import { openDatabase } from "./db/client";
 import { migrateToLatest } from "./db/migrate";
 import { databaseIsEmpty, demoSignInsText, seedDemo } from "./demo/seed";
+import { seedDemoStrips } from "./demo/seed-strips";
 import { startLocalSmtp, type LocalSmtp } from "./mail/local-smtp";
 import { createMailer } from "./mail/mailer";
 import { createOutbox } from "./mail/outbox";
@@ -22,9 +23,10 @@ export async function boot(
   const db = openDatabase(config.dbFile);
   await migrateToLatest(db);
 
-  if (opts.seedIfEmpty && config.demo && (await databaseIsEmpty(db))) {
+  const seeding = !!opts.seedIfEmpty && config.demo && (await databaseIsEmpty(db));
+  if (seeding) {
     const seeded = await seedDemo(db);
-    logger.info(seeded, "demo data loaded");
+    logger.info(seeded, "demo catalogue and members loaded");
   }
 
   let smtp: LocalSmtp | null = null;
@@ -41,6 +43,10 @@ export async function boot(
     const removed = await services.uploads.cleanupDrafts();
     if (removed) logger.info({ removed }, "old drafts removed");
   };
+  if (seeding) {
+    console.log("Posting the demo strips through the real analysis (first start only, about a minute)…");
+    logger.info(await seedDemoStrips({ db, services, logger }), "demo strips posted");
+  }
   await cleanup();
   const cleanupTimer = setInterval(() => void cleanup().catch((err) => logger.error({ err }, "draft cleanup failed")), 60 * 60 * 1000);
   cleanupTimer.unref();

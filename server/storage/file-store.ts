@@ -1,4 +1,4 @@
-import { promises as fs } from "node:fs";
+import { mkdirSync, promises as fs } from "node:fs";
 import path from "node:path";
 
 /**
@@ -23,6 +23,7 @@ const safeKey = /^[a-z0-9][a-z0-9/_.-]*$/i;
 export function createLocalFileStore(dataDir: string): FileStore {
   const root = path.resolve(dataDir);
   const tmpDir = path.join(root, "tmp");
+  mkdirSync(tmpDir, { recursive: true });
   const pathOf = (key: string) => {
     if (!safeKey.test(key) || key.includes("..")) throw new Error(`Unsafe storage key: ${key}`);
     return path.join(root, key);

@@ -34,11 +34,22 @@ function assertCanContribute(me: Me) {
 
 /** Hashes at most this many bits apart are the same photo, re-encoded or lightly edited (ours). */
 export const DUPLICATE_BITS = 6;
+/** …and every band within this ΔE2000 of the other strip's (ours: "similar" at most). */
+export const DUPLICATE_BAND_DE = 4;
 
-async function findDuplicate(db: DbOrTx, phash: string | null) {
+/**
+ * A near-duplicate needs both a close perceptual hash and the same bands: strip photos share one
+ * layout (a band across white card), so the hash alone would call different strips the same.
+ */
+async function findDuplicate(db: DbOrTx, phash: string | null, bands: Analysis["bands"]) {
   if (!phash) return null;
   for (const other of await repo.listPhashes(db)) {
-    if (other.phash && other.phash.length === phash.length && phashDistance(other.phash, phash) <= DUPLICATE_BITS) return other.id;
+    if (!other.phash || other.phash.length !== phash.length || phashDistance(other.phash, phash) > DUPLICATE_BITS) continue;
+    const theirs = await db.selectFrom("strip_bands").selectAll().where("strip_id", "=", other.id).orderBy("position").execute();
+    const same =
+      theirs.length === bands.length &&
+      theirs.every((b, i) => deltaE2000({ l: b.lab_l, a: b.lab_a, b: b.lab_b }, bands[i]!.lab as Lab) <= DUPLICATE_BAND_DE);
+    if (same) return other.id;
   }
   return null;
 }
@@ -159,7 +170,7 @@ export function createStripsService(deps: { db: Db; store: FileStore }) {
         const analysis = JSON.parse(upload.analysis_json) as Analysis;
         const now = nowIso();
         // A photo that looks like another strip's waits for a moderator, whoever posts it.
-        const duplicateOf = await findDuplicate(tx, upload.phash);
+        const duplicateOf = await findDuplicate(tx, upload.phash, analysis.bands);
         const published = me.standing === "trusted" && duplicateOf === null;
         const id = await repo.insertStrip(tx, {
           author_id: me.id,

@@ -59,6 +59,8 @@ export function createUploadsService(deps: { db: Db; store: FileStore; pool: Upl
     await repo.startAttempt(db, id);
     const white = row.white_x !== null && row.white_y !== null ? { x: row.white_x, y: row.white_y } : undefined;
     let result: UploadJobResult;
+    // Work queued in-process (a restart's recovery, the demo seed) waits for room in the pool.
+    while (pool.isFull()) await new Promise((r) => setTimeout(r, 200));
     try {
       result = await pool.run({
         originalPath: store.pathOf(row.original_key),

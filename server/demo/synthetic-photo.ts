@@ -1,0 +1,1 @@
+export * from "../../tests/analysis/support/synthetic";

@@ -115,3 +115,11 @@ test("a newcomer signs in with an e-mailed link after confirming on our page", a
   await expect(page).toHaveURL(/\/sign-in\/error/);
   await expect(page.getByRole("button", { name: /Account menu for/ })).toHaveCount(0);
 });
+
+test("the sign-in confirmation page refuses links that lead anywhere but our own sign-in callback", async ({ page }) => {
+  for (const next of ["https://elsewhere.example/auth/callback/nodemailer?token=x", "//elsewhere.example/auth/callback/nodemailer", "/auth/signout", "javascript:alert(1)"]) {
+    await page.goto(`/sign-in/confirm?next=${encodeURIComponent(next)}`);
+    await expect(page.getByRole("heading").first()).toBeVisible();
+    await expect(page.getByRole("button", { name: "Sign in to Blendwell" })).toHaveCount(0);
+  }
+});

@@ -4,7 +4,15 @@ import type { LabValue } from "./common";
 export const uploadStatuses = ["processing", "ready", "failed"] as const;
 export type UploadStatus = (typeof uploadStatuses)[number];
 
-export type InkSuggestion = { inkId: number; name: string; brand: string; deltaE: number };
+export type InkSuggestion = {
+  inkId: number;
+  name: string;
+  brand: string;
+  deltaE: number;
+  /** The ink's catalogue reference colour. */
+  hex?: string;
+  lab?: LabValue;
+};
 
 export type AnalysisBand = {
   index: number;

@@ -15,6 +15,11 @@ export const router = createBrowserRouter([
     HydrateFallback: () => <Loading className="mx-auto max-w-5xl px-4" label="Opening Blendwell…" />,
     children: [
       { index: true, lazy: page(() => import("./routes/home")) },
+      { path: "gallery", lazy: page(() => import("./routes/gallery")) },
+      { path: "post", lazy: page(() => import("./routes/post")) },
+      { path: "strips/:id", lazy: page(() => import("./routes/strip")) },
+      { path: "members/:id", lazy: page(() => import("./routes/member")) },
+      { path: "help", lazy: page(() => import("./routes/help")) },
       { path: "inks", lazy: page(() => import("./routes/inks")) },
       { path: "inks/new", lazy: page(() => import("./routes/ink-new")) },
       { path: "inks/import", lazy: page(() => import("./routes/ink-import")) },

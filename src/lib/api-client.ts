@@ -58,6 +58,15 @@ function fallbackError(status: number): ApiError {
   return new ApiError(status, `http_${status}`, message);
 }
 
+/** The ApiError for a failed answer: the server's own `{error}` body when it sent one. */
+export function apiErrorFrom(status: number, data: unknown): ApiError {
+  if (isErrorBody(data)) {
+    const { code, message, fields } = data.error;
+    return new ApiError(status, code, message, fields);
+  }
+  return fallbackError(status);
+}
+
 function isErrorBody(value: unknown): value is ApiErrorBody {
   if (typeof value !== "object" || value === null || !("error" in value)) return false;
   const e = (value as { error: unknown }).error;
@@ -125,13 +134,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   if (response.status === 204 || response.status === 205) return undefined as T;
   const data = await readJson(response);
 
-  if (!response.ok) {
-    if (isErrorBody(data)) {
-      const { code, message, fields } = data.error;
-      throw new ApiError(response.status, code, message, fields);
-    }
-    throw fallbackError(response.status);
-  }
+  if (!response.ok) throw apiErrorFrom(response.status, data);
   return data as T;
 }
 

@@ -26,6 +26,11 @@ export default async function processUpload(job: UploadJob): Promise<UploadJobRe
       { width: small.width, height: small.height, data: small.data },
       { catalogue: job.catalogue, stash: new Set(job.stash), white: job.white },
     );
+    // Suggestions carry the ink's reference colour, so a page can show it beside the band.
+    const byId = new Map(job.catalogue.map((ink) => [ink.id, ink]));
+    for (const band of analysis.bands) {
+      band.suggestions = band.suggestions.map((s) => ({ ...s, hex: byId.get(s.inkId)?.hex, lab: byId.get(s.inkId)?.lab }));
+    }
     return {
       ok: true,
       analysis,

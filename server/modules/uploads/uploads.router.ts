@@ -119,7 +119,7 @@ export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore;
     if (!parsed.success || (variant !== "display" && variant !== "thumb")) throw notFound("That image");
     const row = await uploads.get(parsed.data.id, res.locals.user);
     const key = variant === "display" ? row.display_key : row.thumb_key;
-    if (!key || row.status !== "ready") throw notFound("That image");
+    if (!key || row.status === "processing") throw notFound("That image");
     res.set("Cache-Control", "private, max-age=3600");
     res.type("image/webp").sendFile(store.pathOf(key));
   });

@@ -33,8 +33,9 @@ export function imageUrl(id: string, variant: "display" | "thumb") {
 export function toUpload(row: UploadRow): Upload {
   const view: Upload = { id: row.id, status: row.status, createdAt: row.created_at };
   if (row.status === "failed") view.error = { code: row.error_code ?? "failed", message: row.error_message ?? "The photo could not be read." };
-  if (row.status === "ready" && row.analysis_json) {
-    view.analysis = JSON.parse(row.analysis_json);
+  if (row.status === "ready" && row.analysis_json) view.analysis = JSON.parse(row.analysis_json);
+  // A failed re-run keeps the photo, so its images stay available for another try.
+  if (row.status !== "processing" && row.display_key) {
     view.images = { display: imageUrl(row.id, "display"), thumb: imageUrl(row.id, "thumb"), placeholder: row.placeholder ?? "" };
   }
   return view;

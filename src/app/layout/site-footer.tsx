@@ -15,13 +15,18 @@ export function SiteFooter() {
         <nav aria-label="Footer">
           <ul className="flex flex-wrap gap-x-1 gap-y-1 sm:flex-col sm:items-end">
             <li>
-              <Link to="/" className="inline-flex min-h-11 items-center px-2 hover:text-ink hover:underline">
+              <Link to="/gallery" className="inline-flex min-h-11 items-center px-2 hover:text-ink hover:underline">
                 Gallery
               </Link>
             </li>
             <li>
               <Link to="/inks" className="inline-flex min-h-11 items-center px-2 hover:text-ink hover:underline">
                 Ink catalogue
+              </Link>
+            </li>
+            <li>
+              <Link to="/help" className="inline-flex min-h-11 items-center px-2 hover:text-ink hover:underline">
+                Help: photographing strips, safety
               </Link>
             </li>
             <li>

@@ -6,8 +6,9 @@ import { RoleBadge } from "../../features/accounts/components/role-badge";
 import { SignOutButton } from "../../features/accounts/components/sign-out-button";
 
 const navItems = [
-  { to: "/", label: "Gallery", end: true },
+  { to: "/gallery", label: "Gallery", end: false },
   { to: "/inks", label: "Inks", end: false },
+  { to: "/help", label: "Help", end: false },
 ] as const;
 
 const navLinkClasses = ({ isActive }: { isActive: boolean }) =>
@@ -21,6 +22,25 @@ export function Wordmark() {
       <span className="text-2xl leading-none font-bold tracking-tight">Blendwell</span>
       <span aria-hidden="true" className="blend-ornament mt-1 h-1.5 w-full rounded-full opacity-90 group-hover:opacity-100" />
     </Link>
+  );
+}
+
+/** The one call to action for members, kept in the header on every screen size. */
+function PostStripLink({ className = "" }: { className?: string }) {
+  return (
+    <NavLink
+      to="/post"
+      className={({ isActive }) =>
+        `inline-flex min-h-11 items-center gap-1.5 rounded-md px-3 font-bold whitespace-nowrap text-card shadow-sm sm:px-4 ${
+          isActive ? "bg-accent-deep" : "bg-accent hover:bg-accent-deep"
+        } ${className}`
+      }
+    >
+      <span aria-hidden="true" className="text-lg leading-none">
+        +
+      </span>
+      Post a strip
+    </NavLink>
   );
 }
 
@@ -60,6 +80,11 @@ function MobileMenu({ id, onClose }: { id: string; onClose: () => void }) {
               <RoleBadge role={me.role} />
             </p>
             <ul className="flex flex-col gap-1">
+              <li>
+                <NavLink to={`/members/${me.id}`} className={navLinkClasses} onClick={onClose}>
+                  Your strips
+                </NavLink>
+              </li>
               <li>
                 <NavLink to="/account" className={navLinkClasses} onClick={onClose}>
                   Account
@@ -110,23 +135,26 @@ export function SiteHeader() {
             ))}
           </ul>
         </nav>
-        <div className="ml-auto hidden sm:block">
-          {isPending ? (
-            <span className="inline-block h-11 w-24" aria-hidden="true" />
-          ) : me ? (
-            <AccountMenu me={me} />
-          ) : (
-            <SignInLink />
-          )}
+        <div className="ml-auto flex items-center gap-2">
+          {me && <PostStripLink />}
+          <div className="hidden sm:block">
+            {isPending ? (
+              <span className="inline-block h-11 w-24" aria-hidden="true" />
+            ) : me ? (
+              <AccountMenu me={me} />
+            ) : (
+              <SignInLink />
+            )}
+          </div>
         </div>
         <button
           type="button"
-          className="ml-auto inline-flex min-h-11 min-w-11 items-center gap-2 rounded-md border border-rule-strong bg-card px-3 font-bold sm:hidden"
+          className="inline-flex min-h-11 min-w-11 shrink-0 items-center gap-2 rounded-md border border-rule-strong bg-card px-3 font-bold sm:hidden"
           aria-expanded={menuOpen}
           aria-controls={menuId}
           onClick={() => setMenuOpen((o) => !o)}
         >
-          <span aria-hidden="true" className="flex w-4 flex-col gap-[3px]">
+          <span aria-hidden="true" className="flex w-4 shrink-0 flex-col gap-[3px]">
             <span className={`h-0.5 rounded bg-current transition-transform ${menuOpen ? "translate-y-[5px] rotate-45" : ""}`} />
             <span className={`h-0.5 rounded bg-current ${menuOpen ? "opacity-0" : ""}`} />
             <span className={`h-0.5 rounded bg-current transition-transform ${menuOpen ? "-translate-y-[5px] -rotate-45" : ""}`} />

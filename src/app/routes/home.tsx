@@ -1,6 +1,8 @@
+import { Link } from "react-router";
 import { ButtonLink } from "../../components/ui/button";
 import { DocumentTitle } from "../../components/ui/page-header";
 import { useMe } from "../../features/accounts/api/get-me";
+import { StripFeed } from "../../features/strips/components/strip-feed";
 
 export default function HomePage() {
   const { data: me, isPending } = useMe();
@@ -18,7 +20,10 @@ export default function HomePage() {
             them here, so everyone can find combinations that flow and inks they do not own yet.
           </p>
           <div className="flex flex-wrap gap-3">
-            <ButtonLink to="/inks">Browse the ink catalogue</ButtonLink>
+            {me ? <ButtonLink to="/post">Post a strip</ButtonLink> : <ButtonLink to="/gallery">See the gallery</ButtonLink>}
+            <ButtonLink to="/inks" variant="secondary">
+              Browse the ink catalogue
+            </ButtonLink>
             {!isPending && !me && (
               <ButtonLink to="/sign-in" variant="secondary">
                 Join or sign in
@@ -42,17 +47,27 @@ export default function HomePage() {
           <h2 id="newest-title" className="text-2xl font-bold">
             Newest strips
           </h2>
+          <Link to="/gallery" className="inline-flex min-h-11 items-center font-bold text-accent hover:underline">
+            The whole gallery <span aria-hidden="true">&nbsp;→</span>
+          </Link>
         </div>
-        <div className="rounded-xl border-2 border-dashed border-rule-strong bg-card/60 px-5 py-10 text-center sm:px-10">
-          <p className="text-xl font-bold">Strips arrive soon</p>
-          <p className="mx-auto mt-2 max-w-prose text-ink-soft">
-            The gallery opens once posting is ready: each strip will show here as a wide band with its inks, in order,
-            underneath. Until then, the ink catalogue is open to browse.
-          </p>
-          <ButtonLink to="/inks" variant="quiet" className="mt-4">
-            Look through the inks <span aria-hidden="true">→</span>
-          </ButtonLink>
-        </div>
+        <StripFeed
+          filters={{ sort: "newest", limit: 5 }}
+          label="Newest strips"
+          loadMore={false}
+          empty={
+            <div className="rounded-xl border-2 border-dashed border-rule-strong bg-card/60 px-5 py-10 text-center sm:px-10">
+              <p className="text-xl font-bold">No strips yet</p>
+              <p className="mx-auto mt-2 max-w-prose text-ink-soft">
+                Each strip shows here as a wide band with its inks, in order, underneath. Until the first one arrives, the
+                ink catalogue is open to browse.
+              </p>
+              <ButtonLink to={me ? "/post" : "/inks"} variant="quiet" className="mt-4">
+                {me ? "Post the first strip" : "Look through the inks"} <span aria-hidden="true">→</span>
+              </ButtonLink>
+            </div>
+          }
+        />
       </section>
     </div>
   );

@@ -15,6 +15,8 @@ import { InkColourFacts } from "../../features/inks/components/ink-colour-facts"
 import { InkForm } from "../../features/inks/components/ink-form";
 import { InkSwatch } from "../../features/inks/components/ink-swatch";
 import { DiscontinuedBadge, InkTypeBadge } from "../../features/inks/components/ink-type-badge";
+import { StripFeed } from "../../features/strips/components/strip-feed";
+import { GALLERY_PAGE_SIZE } from "../../features/strips/strip-filters";
 import type { Ink } from "../../../shared/schemas/inks";
 import { errorMessage, isApiError } from "../../lib/api-client";
 import { formatDate } from "../../lib/format";
@@ -137,6 +139,18 @@ function InkDetail({ id }: { id: number }) {
           </p>
         </section>
       )}
+
+      <section aria-labelledby="ink-strips" className="space-y-4">
+        <h2 id="ink-strips" className="border-b border-rule pb-2 text-2xl font-bold">
+          Strips with this ink
+        </h2>
+        <StripFeed
+          filters={{ sort: "newest", ink: data.id, limit: GALLERY_PAGE_SIZE }}
+          label={`Strips with ${data.name}`}
+          eagerCount={0}
+          empty={<p className="text-ink-soft">No published strip uses {data.name} yet.</p>}
+        />
+      </section>
     </article>
   );
 }

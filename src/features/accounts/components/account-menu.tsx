@@ -4,7 +4,7 @@ import type { Me } from "../../../../shared/schemas/accounts";
 import { RoleBadge } from "./role-badge";
 import { SignOutButton } from "./sign-out-button";
 
-/** The signed-in member's name, opening a small menu: Account, Sign out. */
+/** The signed-in member's name, opening a small menu: Your strips, Account, Sign out. */
 export function AccountMenu({ me }: { me: Me }) {
   const id = useId();
   const [open, setOpen] = useState(false);
@@ -63,6 +63,11 @@ export function AccountMenu({ me }: { me: Me }) {
       >
         <p className="truncate px-3 pt-1.5 pb-2 text-sm text-ink-muted">{me.email}</p>
         <ul className="flex flex-col">
+          <li>
+            <Link to={`/members/${me.id}`} className={itemClasses} onClick={() => setOpen(false)}>
+              Your strips
+            </Link>
+          </li>
           <li>
             <Link to="/account" className={itemClasses} onClick={() => setOpen(false)}>
               Account

@@ -1,12 +1,11 @@
+import { ColourSwatch } from "../../../components/ui/colour-swatch";
+
 type InkSwatchProps = {
   hex: string;
   className?: string;
 };
 
-/**
- * The colour patch itself. Always decorative: the ink's colour words and numbers sit beside it
- * as text, so nobody depends on seeing the patch.
- */
+/** An ink's reference colour as a patch (decorative; words and numbers go beside it). */
 export function InkSwatch({ hex, className = "h-12 w-16" }: InkSwatchProps) {
-  return <div aria-hidden="true" className={`swatch-ink shrink-0 rounded-md ${className}`} style={{ backgroundColor: hex }} />;
+  return <ColourSwatch hex={hex} className={className} />;
 }

@@ -1,0 +1,39 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import type { ReviewQueueItem } from "../../../../shared/schemas/moderation";
+import { api } from "../../../lib/api-client";
+import { reviewKeys } from "./keys";
+
+export type ReviewQueue = { items: ReviewQueueItem[] };
+
+export function getReviewQueue(signal?: AbortSignal): Promise<ReviewQueue> {
+  return api.get<ReviewQueue>("/api/review-queue", { signal });
+}
+
+export const reviewQueueQueryOptions = () =>
+  queryOptions({
+    queryKey: reviewKeys.queue(),
+    queryFn: ({ signal }) => getReviewQueue(signal),
+    // Several moderators work the same queue: keep it fresh.
+    staleTime: 15_000,
+    refetchOnWindowFocus: true,
+    refetchInterval: 60_000,
+  });
+
+export function useReviewQueue() {
+  return useQuery(reviewQueueQueryOptions());
+}
+
+/**
+ * How many strips wait for a decision, for the header's badge. Pass `enabled` only for
+ * moderators and admins (anyone else gets 403). Undefined while unknown.
+ */
+export function useReviewQueueCount(enabled: boolean): number | undefined {
+  const { data } = useQuery({
+    ...reviewQueueQueryOptions(),
+    enabled,
+    refetchInterval: 120_000,
+    select: (queue) => queue.items.length,
+    meta: { errorsShownInline: true },
+  });
+  return enabled ? data : undefined;
+}

@@ -3,7 +3,7 @@ import path from "node:path";
 import sharp from "sharp";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { deltaE2000 } from "../../shared/colour";
+import { deltaE2000, srgbToLab } from "../../shared/colour";
 import type { Ink } from "../../shared/schemas/inks";
 import type { Upload } from "../../shared/schemas/uploads";
 import { createTestApp, DEMO, signedIn, type TestApp } from "../setup/test-app";
@@ -62,6 +62,20 @@ describe("uploading a strip photo", () => {
     });
     expect(analysis.transitions).toHaveLength(2);
     expect(upload.images?.display).toBe(`/api/uploads/${res.body.id}/images/display`);
+
+    // The photo members see is corrected: the paper above the strip (warm D50 cast in the
+    // photo) reads neutral, within ΔE2000 2 of a grey of the same lightness.
+    const shown = await agent.get(upload.images!.display).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on("data", (c: Buffer) => chunks.push(c));
+      r.on("end", () => cb(null, Buffer.concat(chunks)));
+    });
+    const { data, info } = await sharp(shown.body as Buffer).raw().toBuffer({ resolveWithObject: true });
+    const x = Math.round(info.width * 0.5);
+    const y = Math.round(info.height * 0.2);
+    const o = (y * info.width + x) * info.channels;
+    const paper = srgbToLab(data[o]!, data[o + 1]!, data[o + 2]!);
+    expect(deltaE2000(paper, { l: paper.l, a: 0, b: 0 })).toBeLessThan(2);
   });
 
   it("serves derivatives without EXIF or GPS, only to the owner and moderators", async () => {

@@ -2,6 +2,9 @@ import { useId, useState } from "react";
 import { Link, NavLink, useLocation } from "react-router";
 import { useMe } from "../../features/accounts/api/get-me";
 import { AccountMenu } from "../../features/accounts/components/account-menu";
+import { NoticesLink } from "../../features/notices/components/notices-link";
+import { ReviewQueueLink } from "../../features/review/components/review-queue-link";
+import { canModerate } from "../../lib/roles";
 import { RoleBadge } from "../../features/accounts/components/role-badge";
 import { SignOutButton } from "../../features/accounts/components/sign-out-button";
 
@@ -81,6 +84,14 @@ function MobileMenu({ id, onClose }: { id: string; onClose: () => void }) {
             </p>
             <ul className="flex flex-col gap-1">
               <li>
+                <NoticesLink className={navLinkClasses} onClick={onClose} />
+              </li>
+              {canModerate(me.role) && (
+                <li>
+                  <ReviewQueueLink className={navLinkClasses} onClick={onClose} />
+                </li>
+              )}
+              <li>
                 <NavLink to={`/members/${me.id}`} className={navLinkClasses} onClick={onClose}>
                   Your strips
                 </NavLink>
@@ -133,6 +144,16 @@ export function SiteHeader() {
                 </NavLink>
               </li>
             ))}
+            {me && canModerate(me.role) && (
+              <li>
+                <ReviewQueueLink className={navLinkClasses} />
+              </li>
+            )}
+            {me && (
+              <li>
+                <NoticesLink className={navLinkClasses} />
+              </li>
+            )}
           </ul>
         </nav>
         <div className="ml-auto flex items-center gap-2">

@@ -5,6 +5,8 @@ import { Loading } from "../../components/ui/loading";
 import { Notice } from "../../components/ui/notice";
 import { DocumentTitle } from "../../components/ui/page-header";
 import { useMe } from "../../features/accounts/api/get-me";
+import { MemberModerationPanel } from "../../features/review/components/member-moderation-panel";
+import { canModerate } from "../../lib/roles";
 import { useMember } from "../../features/strips/api/get-member";
 import { StripList } from "../../features/strips/components/strip-list";
 import { errorMessage, isApiError } from "../../lib/api-client";
@@ -67,6 +69,10 @@ function MemberDetail({ id }: { id: string }) {
           </div>
         )}
       </header>
+
+      {me && canModerate(me.role) && !own && (
+        <MemberModerationPanel memberId={data.id} memberName={data.name} viewerRole={me.role} />
+      )}
 
       {unpublished.length > 0 && (
         <section aria-labelledby="unpublished-title" className="flex flex-col gap-4">

@@ -10,6 +10,7 @@ import { DocumentTitle } from "../../components/ui/page-header";
 import { toast } from "../../components/ui/toast";
 import { useMe } from "../../features/accounts/api/get-me";
 import { InkPicker } from "../../features/inks/components/ink-picker";
+import { ReportStripButton } from "../../features/review/components/report-strip-button";
 import { useRelatedStrips } from "../../features/strips/api/get-related-strips";
 import { useStrip } from "../../features/strips/api/get-strip";
 import { stripKeys } from "../../features/strips/api/keys";
@@ -76,7 +77,7 @@ function RelatedStrips({ id }: { id: number }) {
   );
 }
 
-function StripView({ strip, isAuthor, onEdit }: { strip: Strip; isAuthor: boolean; onEdit: () => void }) {
+function StripView({ strip, isAuthor, signedIn, onEdit }: { strip: Strip; isAuthor: boolean; signedIn: boolean; onEdit: () => void }) {
   const navigate = useNavigate();
   const date = strip.publishedAt ?? strip.createdAt;
   const { width, height } = strip.images;
@@ -112,6 +113,12 @@ function StripView({ strip, isAuthor, onEdit }: { strip: Strip; isAuthor: boolea
               void navigate(`/members/${strip.author.id}`);
             }}
           />
+        </div>
+      )}
+
+      {!isAuthor && signedIn && strip.status === "published" && (
+        <div className="flex flex-wrap gap-3">
+          <ReportStripButton stripId={strip.id} />
         </div>
       )}
 
@@ -230,7 +237,7 @@ function StripDetail({ id }: { id: number }) {
           />
         </Card>
       ) : (
-        <StripView strip={data} isAuthor={isAuthor} onEdit={() => setEditing(true)} />
+        <StripView strip={data} isAuthor={isAuthor} signedIn={!!me} onEdit={() => setEditing(true)} />
       )}
 
       <RelatedStrips id={id} />

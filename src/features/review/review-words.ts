@@ -1,6 +1,6 @@
 import { describeDeltaE } from "../../../shared/colour";
 import type { DecisionAction, QueueReason } from "../../../shared/schemas/moderation";
-import { statusLabels, stripStatuses, type StripStatus } from "../../../shared/schemas/strips";
+import { stripStatuses, type StripStatus } from "../../../shared/schemas/strips";
 import { formatDateTime, formatNumber } from "../../lib/format";
 
 const MINUTE = 60_000;
@@ -79,6 +79,14 @@ export function logActionLabel(action: string): string {
 }
 
 const isStatus = (v: string): v is StripStatus => (stripStatuses as readonly string[]).includes(v);
+// Plainer than the strip page's labels: in the log a hidden strip may have been held automatically.
+const logStatusWords: Record<StripStatus, string> = {
+  pending: "Waiting for review",
+  published: "Published",
+  hidden: "Hidden",
+  returned: "Returned for edits",
+  rejected: "Not accepted",
+};
 const roleWords: Record<string, string> = { member: "Member", moderator: "Moderator", admin: "Admin" };
 const standingWords: Record<string, string> = { new: "New member", trusted: "Trusted member" };
 
@@ -91,6 +99,11 @@ export function stateWords(action: string, value: string | null): string {
   if (value === null) return "—";
   if (action === "change role") return roleWords[value] ?? value;
   if (action === "trust" || action === "untrust") return standingWords[value] ?? value;
-  if (isStatus(value)) return statusLabels[value];
+  if (isStatus(value)) return logStatusWords[value];
   return value;
+}
+
+/** The server's 409 text without its "Reload" hint: the queue refreshes by itself. */
+export function withoutReloadHint(message: string): string {
+  return message.replace(/\s*Reload to see the latest\.?\s*$/, "");
 }

@@ -1,4 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
+import type { BinderSummary } from "../../../../shared/schemas/binders";
 import { api } from "../../../lib/api-client";
 import { binderKeys } from "./keys";
 
@@ -12,6 +13,7 @@ export function useDeleteBinder() {
     mutationFn: deleteBinder,
     onSuccess: (_data, id) => {
       queryClient.removeQueries({ queryKey: binderKeys.detail(id) });
+      queryClient.setQueryData<BinderSummary[] | null>(binderKeys.mine(), (old) => old?.filter((b) => b.id !== id) ?? old);
       void queryClient.invalidateQueries({ queryKey: binderKeys.lists() });
       // The strips it held are no longer saved in it.
       void queryClient.invalidateQueries({ queryKey: [...binderKeys.all, "saved-in"] });

@@ -1,7 +1,7 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Link } from "react-router";
 import type { Binder } from "../../../../shared/schemas/binders";
-import { Button, ButtonLink } from "../../../components/ui/button";
+import { Button, ButtonLink, buttonClasses } from "../../../components/ui/button";
 import { Card } from "../../../components/ui/card";
 import { Loading } from "../../../components/ui/loading";
 import { Notice } from "../../../components/ui/notice";
@@ -11,7 +11,7 @@ import { formatDate, plural } from "../../../lib/format";
 import { useBinder } from "../api/get-binder";
 import { BinderCover } from "./binder-cover";
 import { BinderDetailsEditor } from "./binder-details-editor";
-import { BinderItemList } from "./binder-item-list";
+import { BINDER_TITLE_ID, BinderItemList } from "./binder-item-list";
 import { CopyLinkButton } from "./copy-link-button";
 import { DeleteBinderButton } from "./delete-binder-button";
 import { VisibilityBadge } from "./visibility-badge";
@@ -45,13 +45,22 @@ export function BinderUnavailable() {
 
 function BinderHeader({ binder, onDeleted }: { binder: Binder; onDeleted?: () => void }) {
   const [editing, setEditing] = useState(false);
+  const editButton = useRef<HTMLButtonElement>(null);
+  const returnFocus = useRef(false);
+
+  useEffect(() => {
+    if (editing || !returnFocus.current) return;
+    returnFocus.current = false;
+    editButton.current?.focus();
+  }, [editing]);
+
   return (
     <header className="flex flex-col gap-4 border-b border-rule pb-6">
       <BinderCover cover={binder.cover} showWords={false} className="max-w-md" />
       <div className="flex flex-col gap-4 sm:flex-row sm:items-end sm:justify-between">
         <div className="min-w-0 space-y-2">
           <p className="text-sm font-bold tracking-wide text-ink-muted uppercase">{binder.isOwner ? "Your binder" : "Binder"}</p>
-          <h1 id="binder-title" className="text-3xl leading-tight font-bold break-words text-balance sm:text-4xl">
+          <h1 id={BINDER_TITLE_ID} tabIndex={-1} className="text-3xl leading-tight font-bold break-words text-balance sm:text-4xl">
             {binder.name}
           </h1>
           <p className="flex flex-wrap items-center gap-x-2 gap-y-1 text-ink-soft">
@@ -75,9 +84,9 @@ function BinderHeader({ binder, onDeleted }: { binder: Binder; onDeleted?: () =>
           {binder.visibility === "public" && <CopyLinkButton path={`/binders/${binder.id}`} />}
           {binder.isOwner && !editing && (
             <>
-              <Button variant="secondary" onClick={() => setEditing(true)}>
+              <button ref={editButton} type="button" className={buttonClasses("secondary")} onClick={() => setEditing(true)}>
                 Edit details
-              </Button>
+              </button>
               <DeleteBinderButton binder={binder} onDeleted={onDeleted} />
             </>
           )}
@@ -89,7 +98,13 @@ function BinderHeader({ binder, onDeleted }: { binder: Binder; onDeleted?: () =>
       {editing && (
         <Card>
           <h2 className="mb-4 text-xl font-bold">Edit binder details</h2>
-          <BinderDetailsEditor binder={binder} onDone={() => setEditing(false)} />
+          <BinderDetailsEditor
+            binder={binder}
+            onDone={() => {
+              returnFocus.current = true;
+              setEditing(false);
+            }}
+          />
         </Card>
       )}
     </header>
@@ -118,7 +133,7 @@ export function BinderDetail({ binderId, onDeleted }: BinderDetailProps) {
 
   const data = binder.data;
   return (
-    <article aria-labelledby="binder-title" className="flex flex-col gap-8">
+    <article aria-labelledby={BINDER_TITLE_ID} className="flex flex-col gap-8">
       <DocumentTitle title={data.name} />
       {data.isOwner && (
         <nav aria-label="Breadcrumb">

@@ -4,7 +4,7 @@ import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { binderInput, visibilities } from "../../../../shared/schemas/binders";
 import { Button } from "../../../components/ui/button";
-import { Field, TextArea, TextInput } from "../../../components/ui/field";
+import { Field, fieldErrorText, TextArea, TextInput } from "../../../components/ui/field";
 import { FormAlert } from "../../../components/ui/notice";
 import { errorMessage } from "../../../lib/api-client";
 import { applyApiFieldErrors } from "../../../lib/form-errors";
@@ -105,7 +105,7 @@ export function BinderForm({ defaultValues, submitLabel, busyLabel, onSubmit, on
         ))}
         {errors.visibility?.message && (
           <p id={`${id}-visibility-error`} className="text-sm font-bold text-danger">
-            {errors.visibility.message}
+            {fieldErrorText("Visibility", errors.visibility.message)}
           </p>
         )}
       </fieldset>

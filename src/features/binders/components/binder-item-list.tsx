@@ -10,6 +10,9 @@ import { moveItem, sameOrder } from "../move-item";
 import { BinderItemNote } from "./binder-item-note";
 import { BinderStrip } from "./binder-strip";
 
+/** The binder page's title (in BinderDetail). */
+export const BINDER_TITLE_ID = "binder-title";
+
 const itemName = (item: BinderItem) => (item.available ? item.strip.title : "a strip no longer available");
 
 type Direction = "up" | "down";
@@ -24,6 +27,8 @@ export function BinderItemList({ binder }: { binder: Binder }) {
   const remove = useRemoveBinderItem();
   const [announcement, setAnnouncement] = useState("");
   const [dragId, setDragId] = useState<number | null>(null);
+  // Also kept outside state: a quick drop can arrive before the last render.
+  const dragging = useRef<number | null>(null);
   const [dropIndex, setDropIndex] = useState<number | null>(null);
   const [removing, setRemoving] = useState<BinderItem | null>(null);
   const focusAfterMove = useRef<{ stripId: number; direction: Direction } | null>(null);
@@ -56,27 +61,36 @@ export function BinderItemList({ binder }: { binder: Binder }) {
     commit(moveItem(ids, index, direction === "up" ? index - 1 : index + 1), item);
   }
 
+  /** The gap a pointer over row `index` points at: before the row (upper half) or after it. */
+  function slotAt(e: DragEvent<HTMLLIElement>, index: number): number {
+    const box = e.currentTarget.getBoundingClientRect();
+    return e.clientY < box.top + box.height / 2 ? index : index + 1;
+  }
+
   function onDragOver(e: DragEvent<HTMLLIElement>, index: number) {
-    if (dragId === null) return;
+    if (dragging.current === null) return;
     e.preventDefault();
     e.dataTransfer.dropEffect = "move";
-    const box = e.currentTarget.getBoundingClientRect();
-    const slot = e.clientY < box.top + box.height / 2 ? index : index + 1;
+    const slot = slotAt(e, index);
     if (slot !== dropIndex) setDropIndex(slot);
   }
 
-  function onDrop(e: DragEvent) {
+  /** Drops the dragged row into gap `slot` (0 = before the first row, length = after the last). */
+  function drop(e: DragEvent, slot: number | null) {
     e.preventDefault();
-    if (dragId === null || dropIndex === null) return endDrag();
-    const from = ids.indexOf(dragId);
+    e.stopPropagation();
+    const draggedId = dragging.current;
+    endDrag();
+    if (draggedId === null || slot === null) return;
+    const from = ids.indexOf(draggedId);
     const moved = items[from];
     // The slot counts the row being dragged; once it is lifted out, later slots shift up by one.
-    const to = dropIndex > from ? dropIndex - 1 : dropIndex;
+    const to = slot > from ? slot - 1 : slot;
     if (moved) commit(moveItem(ids, from, to), moved);
-    endDrag();
   }
 
   function endDrag() {
+    dragging.current = null;
     setDragId(null);
     setDropIndex(null);
   }
@@ -92,29 +106,39 @@ export function BinderItemList({ binder }: { binder: Binder }) {
     }
     setRemoving(null);
     toast.success(`Removed “${itemName(item)}” from “${binder.name}”.`);
+    // Its row (and the button that asked) is gone: continue from the binder's title.
+    window.setTimeout(() => document.getElementById(BINDER_TITLE_ID)?.focus(), 0);
   }
 
   return (
     <>
       {owner && items.length > 1 && (
         <p id={`${id}-how`} className="text-sm text-ink-soft">
-          Change the order by dragging a strip by its grip <span aria-hidden="true">(⠿)</span>, or with “Move up” and “Move down”.
-          The order is saved as you go.
+          {/* Touch screens do not drag and drop: the buttons are the way there. */}
+          <span className="pointer-coarse:hidden">Drag a strip by its handle, or use its ↑ and ↓ buttons, to change the order.</span>
+          <span className="pointer-fine:hidden">Use the ↑ and ↓ buttons on each strip to change the order.</span> The order is
+          saved as you go.
         </p>
       )}
       <p role="status" className="sr-only">
         {announcement}
       </p>
-      <ol aria-label={`Strips in ${binder.name}`} className="flex flex-col gap-5" onDragOver={(e) => dragId !== null && e.preventDefault()} onDrop={onDrop}>
+      <ol
+        aria-label={`Strips in ${binder.name}`}
+        className="flex flex-col gap-5"
+        onDragOver={(e) => dragging.current !== null && e.preventDefault()}
+        onDrop={(e) => drop(e, dropIndex)}
+      >
         {items.map((item, index) => {
           const name = itemName(item);
-          const dragging = dragId === item.stripId;
+          const isDragged = dragId === item.stripId;
           return (
             <li
               key={item.stripId}
               className="relative"
               data-testid="binder-item"
               onDragOver={owner ? (e) => onDragOver(e, index) : undefined}
+              onDrop={owner ? (e) => drop(e, slotAt(e, index)) : undefined}
             >
               {dropIndex === index && <span aria-hidden="true" className="absolute -top-3.5 right-0 left-0 h-1 rounded-full bg-accent" />}
               {dropIndex === items.length && index === items.length - 1 && (
@@ -125,7 +149,7 @@ export function BinderItemList({ binder }: { binder: Binder }) {
                 id={`${id}-item-${item.stripId}`}
                 className={`flex flex-col gap-3 rounded-xl border bg-card p-2.5 shadow-card sm:p-3 ${
                   item.available ? "border-rule" : "border-dashed border-rule-strong bg-paper"
-                } ${dragging ? "opacity-50" : ""}`}
+                } ${isDragged ? "opacity-50" : ""}`}
               >
                 {owner && (
                   <div className="flex flex-wrap items-center justify-between gap-2 border-b border-rule pb-2">
@@ -139,10 +163,11 @@ export function BinderItemList({ binder }: { binder: Binder }) {
                           e.dataTransfer.setData("text/plain", String(item.stripId));
                           const card = document.getElementById(`${id}-item-${item.stripId}`);
                           if (card) e.dataTransfer.setDragImage(card, 24, 24);
+                          dragging.current = item.stripId;
                           setDragId(item.stripId);
                         }}
                         onDragEnd={endDrag}
-                        className="grid h-11 w-11 cursor-grab place-items-center rounded-md border border-rule-strong bg-paper text-xl text-ink-soft select-none hover:bg-paper-shade active:cursor-grabbing"
+                        className="grid h-11 w-11 cursor-grab place-items-center pointer-coarse:hidden rounded-md border border-rule-strong bg-paper text-xl text-ink-soft select-none hover:bg-paper-shade active:cursor-grabbing"
                       >
                         ⠿
                       </span>
@@ -156,27 +181,33 @@ export function BinderItemList({ binder }: { binder: Binder }) {
                         variant="secondary"
                         className="min-h-11 px-3 text-sm"
                         disabled={index === 0}
+                        aria-label={`Move up: ${name}`}
                         onClick={() => move(index, "up")}
                       >
-                        <span aria-hidden="true">↑</span> Move up<span className="sr-only">: {name}</span>
+                        <span aria-hidden="true">↑</span>
+                        <span className="sm:hidden">Up</span>
+                        <span className="max-sm:hidden">Move up</span>
                       </Button>
                       <Button
                         id={`${id}-${item.stripId}-down`}
                         variant="secondary"
                         className="min-h-11 px-3 text-sm"
                         disabled={index === items.length - 1}
+                        aria-label={`Move down: ${name}`}
                         onClick={() => move(index, "down")}
                       >
-                        <span aria-hidden="true">↓</span> Move down<span className="sr-only">: {name}</span>
+                        <span aria-hidden="true">↓</span>
+                        <span className="sm:hidden">Down</span>
+                        <span className="max-sm:hidden">Move down</span>
                       </Button>
-                      <Button variant="secondary" className="min-h-11 px-3 text-sm" onClick={() => setRemoving(item)}>
-                        Remove<span className="sr-only">: {name}</span>
+                      <Button variant="secondary" className="min-h-11 px-3 text-sm" aria-label={`Remove: ${name}`} onClick={() => setRemoving(item)}>
+                        Remove
                       </Button>
                     </div>
                   </div>
                 )}
                 {item.available ? (
-                  <BinderStrip strip={item.strip} />
+                  <BinderStrip strip={item.strip} eager={index < 2} />
                 ) : (
                   <div className="flex flex-col gap-1 px-1">
                     <p className="font-bold">This strip is no longer available</p>

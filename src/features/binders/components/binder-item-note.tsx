@@ -22,18 +22,18 @@ export function BinderItemNote({ binderId, stripId, note, isOwner, stripName }: 
   const [problem, setProblem] = useState<string | null>(null);
   const save = useUpdateBinderItemNote();
   const editButton = useRef<HTMLButtonElement>(null);
-  const [returnFocus, setReturnFocus] = useState(false);
+  const returnFocus = useRef(false);
 
   // Closing the editor must not drop keyboard focus onto the page's start.
   useEffect(() => {
-    if (editing || !returnFocus) return;
+    if (editing || !returnFocus.current) return;
+    returnFocus.current = false;
     editButton.current?.focus();
-    setReturnFocus(false);
-  }, [editing, returnFocus]);
+  }, [editing]);
 
   function close() {
+    returnFocus.current = true;
     setEditing(false);
-    setReturnFocus(true);
   }
 
   async function submit() {

@@ -20,7 +20,8 @@ export function BinderSummaryCard({ binder, headingLevel = 3, showOwner = false,
   const Heading = headingLevel === 2 ? "h2" : "h3";
   return (
     <article className="flex flex-col gap-3 rounded-xl border border-rule bg-card p-3 shadow-card sm:p-4">
-      <BinderCover cover={binder.cover} />
+      {/* First on screen, after the name for screen readers. */}
+      <BinderCover cover={binder.cover} className="-order-1" />
       <div className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
         <Heading className="min-w-0 text-lg leading-snug font-bold break-words">
           <Link to={`/binders/${binder.id}`} className="text-ink hover:text-accent hover:underline">

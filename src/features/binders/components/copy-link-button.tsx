@@ -35,7 +35,7 @@ export function CopyLinkButton({ path, label = "Copy link" }: { path: string; la
   return (
     <div className="flex flex-col gap-2">
       <Button variant="secondary" onClick={() => void copy()}>
-        <span aria-hidden="true">{state === "copied" ? "✓" : "⧉"}</span>
+        {state === "copied" && <span aria-hidden="true">✓</span>}
         {state === "copied" ? "Link copied" : label}
       </Button>
       <p role="status" className="sr-only">

@@ -1,6 +1,6 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import type { BinderSummary } from "../../../../shared/schemas/binders";
-import { Button } from "../../../components/ui/button";
+import { Button, buttonClasses } from "../../../components/ui/button";
 import { Card } from "../../../components/ui/card";
 import { Loading } from "../../../components/ui/loading";
 import { Notice } from "../../../components/ui/notice";
@@ -14,18 +14,34 @@ import { BinderForm } from "./binder-form";
 import { BinderSummaryCard } from "./binder-summary-card";
 import { DeleteBinderButton } from "./delete-binder-button";
 
+const LIST_TITLE_ID = "my-binders-title";
+
 function MyBinderItem({ binder }: { binder: BinderSummary }) {
   const [editing, setEditing] = useState(false);
+  const editButton = useRef<HTMLButtonElement>(null);
+  const returnFocus = useRef(false);
+
+  // Closing the form puts keyboard focus back on the button that opened it.
+  useEffect(() => {
+    if (editing || !returnFocus.current) return;
+    returnFocus.current = false;
+    editButton.current?.focus();
+  }, [editing]);
+
   return (
     <BinderSummaryCard
       binder={binder}
       actions={
         editing ? undefined : (
           <>
-            <Button variant="secondary" onClick={() => setEditing(true)} aria-expanded={false}>
+            <button ref={editButton} type="button" className={buttonClasses("secondary")} onClick={() => setEditing(true)}>
               Edit<span className="sr-only"> “{binder.name}”</span>
-            </Button>
-            <DeleteBinderButton binder={binder} />
+            </button>
+            {/* The binder's row is gone afterwards: continue from the list's heading. */}
+            <DeleteBinderButton
+              binder={binder}
+              onDeleted={() => window.setTimeout(() => document.getElementById(LIST_TITLE_ID)?.focus(), 0)}
+            />
           </>
         )
       }
@@ -33,7 +49,13 @@ function MyBinderItem({ binder }: { binder: BinderSummary }) {
       {editing && (
         <div className="border-t border-rule pt-4">
           <h4 className="mb-4 font-bold">Edit “{binder.name}”</h4>
-          <BinderDetailsEditor binder={binder} onDone={() => setEditing(false)} />
+          <BinderDetailsEditor
+            binder={binder}
+            onDone={() => {
+              returnFocus.current = true;
+              setEditing(false);
+            }}
+          />
         </div>
       )}
     </BinderSummaryCard>
@@ -95,8 +117,8 @@ export function MyBinders() {
 
   return (
     <div className="grid gap-8 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-      <section aria-labelledby="my-binders-title" className="flex min-w-0 flex-col gap-4">
-        <h2 id="my-binders-title" className="text-2xl font-bold">
+      <section aria-labelledby={LIST_TITLE_ID} className="flex min-w-0 flex-col gap-4">
+        <h2 id={LIST_TITLE_ID} tabIndex={-1} className="text-2xl font-bold">
           {binders.data ? `Your binders (${binders.data.length})` : "Your binders"}
         </h2>
         {binders.data && binders.data.length > 0 && (

@@ -1,7 +1,7 @@
 import { useEffect, useId, useRef, useState, type CSSProperties } from "react";
 import { Link, useLocation } from "react-router";
 import type { BinderSummary } from "../../../../shared/schemas/binders";
-import { Button } from "../../../components/ui/button";
+import { Button, buttonClasses } from "../../../components/ui/button";
 import { errorMessage, isApiError } from "../../../lib/api-client";
 import { plural } from "../../../lib/format";
 import { useAddBinderItem } from "../api/add-binder-item";
@@ -23,10 +23,15 @@ type Message = { tone: "error" | "done"; text: string };
 const PANEL_MAX = 320;
 const EDGE = 16;
 
-/** Where the panel goes so it stays on screen, from where the button is (a 375 px phone too). */
+/**
+ * Where the panel goes, relative to the button's row: under it, lined up with its nearer side of
+ * the screen, and moved in as needed to stay on screen (a 375 px phone too).
+ */
 function panelPlacement(anchor: DOMRect): CSSProperties {
   const width = Math.min(PANEL_MAX, window.innerWidth - 2 * EDGE);
-  let left = Math.min(0, window.innerWidth - EDGE - width - anchor.left);
+  const onRight = anchor.left + anchor.width / 2 > window.innerWidth / 2;
+  let left = onRight ? anchor.width - width : 0;
+  left = Math.min(left, window.innerWidth - EDGE - width - anchor.left);
   left = Math.max(left, EDGE - anchor.left);
   return { width, left };
 }
@@ -120,14 +125,13 @@ export function SaveToBinderButton({ stripId, saves }: SaveToBinderButtonProps) 
         type="button"
         aria-expanded={open}
         aria-controls={`${id}-panel`}
-        disabled={binders.isPending}
         onClick={() => {
           if (open) return close(false);
           if (wrapper.current) setPlacement(panelPlacement(wrapper.current.getBoundingClientRect()));
           setAsked(true);
           setOpen(true);
         }}
-        className={`inline-flex min-h-11 items-center gap-2 rounded-md border px-3 font-bold transition-colors disabled:opacity-60 ${
+        className={`inline-flex min-h-11 items-center gap-2 rounded-md border px-3 font-bold transition-colors ${
           isSaved ? "border-accent bg-accent-soft text-accent-deep hover:bg-accent-soft/70" : "border-rule-strong bg-card text-ink hover:bg-paper-shade"
         }`}
       >
@@ -193,6 +197,21 @@ function SavePanelBody({ stripId, titleId, binders, bindersError, savedIds, save
   const [createError, setCreateError] = useState<string | null>(null);
   // With no binder yet, the form is the only thing to do: show it straight away.
   const showForm = creating ?? (binders !== undefined && binders.length === 0);
+  const newBinderButton = useRef<HTMLButtonElement>(null);
+  const returnFocus = useRef(false);
+
+  // The form goes away under the keyboard's focus: hand focus to the button that replaces it.
+  useEffect(() => {
+    if (showForm || !returnFocus.current) return;
+    returnFocus.current = false;
+    newBinderButton.current?.focus();
+  }, [showForm]);
+
+  function closeForm() {
+    returnFocus.current = true;
+    setCreating(false);
+    setCreateError(null);
+  }
 
   const busy = (binderId: number, on: boolean) =>
     setPending((old) => {
@@ -234,7 +253,7 @@ function SavePanelBody({ stripId, titleId, binders, bindersError, savedIds, save
       else setMessage({ tone: "error", text: `The binder was not created: ${errorMessage(error)}` });
       return;
     }
-    setCreating(false);
+    closeForm();
     busy(binder.id, true);
     try {
       await add.mutateAsync({ binderId: binder.id, stripId });
@@ -339,15 +358,12 @@ function SavePanelBody({ stripId, titleId, binders, bindersError, savedIds, save
               busy={create.isPending}
               nameError={createError}
               onCreate={(values) => void createAndSave(values)}
-              onCancel={() => {
-                setCreating(false);
-                setCreateError(null);
-              }}
+              onCancel={closeForm}
             />
           ) : (
-            <Button variant="secondary" onClick={() => setCreating(true)} className="self-start">
+            <button ref={newBinderButton} type="button" onClick={() => setCreating(true)} className={buttonClasses("secondary", "self-start")}>
               <span aria-hidden="true">+</span> New binder
-            </Button>
+            </button>
           )}
         </>
       )}

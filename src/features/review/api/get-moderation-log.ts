@@ -22,7 +22,7 @@ export const moderationLogInfiniteOptions = (filters: LogFilters) =>
   });
 
 export function useModerationLog(filters: LogFilters) {
-  return useInfiniteQuery(moderationLogInfiniteOptions(filters));
+  return useInfiniteQuery({ ...moderationLogInfiniteOptions(filters), meta: { errorsShownInline: true } });
 }
 
 export const latestModerationOptions = (filters: LogFilters, limit: number) =>

@@ -1,6 +1,6 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useId, useRef, useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { z } from "zod";
 import { actionLabels, bulkDecisionInput, decisionReasons } from "../../../../shared/schemas/moderation";
 import { statusLabels } from "../../../../shared/schemas/strips";
@@ -37,13 +37,13 @@ function BulkForm({ action, picked, onCancel, onResults }: { action: BulkAction;
   const {
     register,
     handleSubmit,
-    watch,
+    control,
     formState: { errors, isSubmitting },
   } = useForm<BulkValues, unknown, z.output<typeof bulkReasonSchema>>({
     resolver: zodResolver(bulkReasonSchema),
     defaultValues: { action, reason: "", note: "" },
   });
-  const reason = watch("reason");
+  const reason = useWatch({ control, name: "reason" });
 
   const submit = handleSubmit(async (values) => {
     setFailure(null);

@@ -1,6 +1,6 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useId, useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { actionLabels, decisionInput, decisionReasons, type DecisionAction } from "../../../../shared/schemas/moderation";
 import { Button, type ButtonVariant } from "../../../components/ui/button";
@@ -10,7 +10,7 @@ import { toast } from "../../../components/ui/toast";
 import { errorMessage } from "../../../lib/api-client";
 import { applyApiFieldErrors } from "../../../lib/form-errors";
 import { isAlreadyDecided, useDecideStrip, type DecisionResult } from "../api/decide-strip";
-import { actionDone } from "../review-words";
+import { actionDone, withoutReloadHint } from "../review-words";
 
 export const actionVariant: Record<DecisionAction, ButtonVariant> = {
   approve: "primary",
@@ -35,12 +35,14 @@ type DecisionFormProps = {
   expectedVersion: number;
   onDone: (result: DecisionResult) => void;
   onCancel: () => void;
+  /** Someone else changed the strip first (the queue is being refreshed). */
+  onLate?: () => void;
 };
 
 type Values = z.input<typeof decisionInput>;
 
 /** One decision on one strip: a reason from our list and a note (needed for "other"). */
-export function DecisionForm({ strip, action, expectedVersion, onDone, onCancel }: DecisionFormProps) {
+export function DecisionForm({ strip, action, expectedVersion, onDone, onCancel, onLate }: DecisionFormProps) {
   const id = useId();
   const decide = useDecideStrip();
   const [failure, setFailure] = useState<{ message: string; details: string[]; late: boolean } | null>(null);
@@ -48,13 +50,13 @@ export function DecisionForm({ strip, action, expectedVersion, onDone, onCancel 
     register,
     handleSubmit,
     setError,
-    watch,
+    control,
     formState: { errors, isSubmitting },
   } = useForm<Values, unknown, z.output<typeof decisionInput>>({
     resolver: zodResolver(decisionInput),
     defaultValues: { action, reason: "", note: "", expectedVersion },
   });
-  const reason = watch("reason");
+  const reason = useWatch({ control, name: "reason" });
 
   const submit = handleSubmit(async (decision) => {
     setFailure(null);
@@ -64,8 +66,9 @@ export function DecisionForm({ strip, action, expectedVersion, onDone, onCancel 
       onDone(result);
     } catch (error) {
       if (isAlreadyDecided(error)) {
-        toast.error(`${errorMessage(error)} The queue has been refreshed.`, `Another moderator decided “${strip.title}” first`);
+        toast.error(`${withoutReloadHint(errorMessage(error))} The queue has been refreshed.`, `Another moderator decided “${strip.title}” first`);
         setFailure({ message: errorMessage(error), details: [], late: true });
+        onLate?.();
         return;
       }
       const details = applyApiFieldErrors(error, setError, ["reason", "note"]);
@@ -91,7 +94,7 @@ export function DecisionForm({ strip, action, expectedVersion, onDone, onCancel 
       </h4>
       {failure?.late ? (
         <Notice tone="warning" title="Another moderator decided this strip first" live>
-          <p>{failure.message.replace(/\s*Reload to see the latest\.?$/, "")} The queue shows it as it is now.</p>
+          <p>{withoutReloadHint(failure.message)} The queue shows it as it is now.</p>
         </Notice>
       ) : (
         <FormAlert message={failure?.message} details={failure?.details} />

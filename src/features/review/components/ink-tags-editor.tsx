@@ -8,6 +8,7 @@ import { toast } from "../../../components/ui/toast";
 import { errorMessage, isApiError } from "../../../lib/api-client";
 import { formatNumber } from "../../../lib/format";
 import { useCorrectInks } from "../api/correct-inks";
+import { withoutReloadHint } from "../review-words";
 
 /** An ink in the editor: what the list needs to show it. */
 export type TagInk = { id: number; name: string; brand: string; hex?: string };
@@ -80,7 +81,7 @@ export function InkTagsEditor({ item, expectedVersion, inkSearch, onDone, onCanc
     } catch (error) {
       const details = isApiError(error) && error.fields ? Object.values(error.fields).flat() : [];
       const late = isApiError(error) && error.status === 409;
-      setFailure({ message: late ? `${errorMessage(error).replace(/\s*Reload to see the latest\.?$/, "")} The queue has been refreshed; open the editor again.` : errorMessage(error), details });
+      setFailure({ message: late ? `${withoutReloadHint(errorMessage(error))} The queue has been refreshed; open the editor again.` : errorMessage(error), details });
     }
   }
 

@@ -6,7 +6,8 @@ const pct = (f: number) => `${(Math.min(1, Math.max(0, f)) * 100).toFixed(2)}%`;
 export function bandGradient(bands: Pick<StripBand, "start" | "end" | "hex">[]): string {
   const sorted = [...bands].sort((a, b) => a.start - b.start);
   if (sorted.length === 0) return "none";
-  if (sorted.length === 1) return sorted[0].hex;
+  // backgroundImage needs an image: one band is a gradient from its colour to itself.
+  if (sorted.length === 1) return `linear-gradient(${sorted[0].hex}, ${sorted[0].hex})`;
   return `linear-gradient(90deg, ${sorted.flatMap((b) => [`${b.hex} ${pct(b.start)}`, `${b.hex} ${pct(b.end)}`]).join(", ")})`;
 }
 

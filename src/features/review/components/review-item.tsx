@@ -8,7 +8,7 @@ import { Notice } from "../../../components/ui/notice";
 import { plural } from "../../../lib/format";
 import type { BulkResult } from "../api/decide-strips";
 import { queueShortcuts } from "../queue-keys";
-import { agoWords, queueReasonText, waitingWords } from "../review-words";
+import { agoWords, queueReasonText, waitingWords, withoutReloadHint } from "../review-words";
 import { BandChecks, InkOrderList } from "./band-checks";
 import { DecisionForm, actionVariant } from "./decision-form";
 import { InkTagsEditor, type InkSearchSlot } from "./ink-tags-editor";
@@ -88,7 +88,7 @@ export const ReviewItem = forwardRef<HTMLElement, ReviewItemProps>(function Revi
                 {queueReasonText[r].label}
               </Badge>
             ))}
-            <Badge tone="accent">{statusLabels[strip.status]}</Badge>
+            <Badge tone="accent">{item.reasons.includes("held: reports") ? "Hidden until decided" : statusLabels[strip.status]}</Badge>
             <span className="text-ink-soft">{waitingWords(item.waitingSince, now)}</span>
           </p>
         </div>
@@ -111,14 +111,14 @@ export const ReviewItem = forwardRef<HTMLElement, ReviewItemProps>(function Revi
           <img
             src={strip.images.thumb}
             srcSet={photoSrcSet(strip.images)}
-            sizes="(min-width: 64rem) 36rem, calc(100vw - 4rem)"
+            sizes="(min-width: 40rem) 24rem, calc(100vw - 4rem)"
             width={strip.images.width || undefined}
             height={strip.images.height || undefined}
             loading="lazy"
             decoding="async"
             alt={`Photo of “${strip.title}”${inkNames ? `, tagged ${inkNames}` : ""}`}
             className={`h-auto w-auto max-w-full self-start rounded-md border border-rule bg-paper-shade object-contain ${
-              strip.orientation === "vertical" ? "max-h-72" : "max-h-56"
+              strip.orientation === "vertical" ? "max-h-80" : "max-h-64"
             }`}
           />
           <QueueBandBar bands={strip.bands} orientation={strip.orientation} flagged={item.farBands} />
@@ -177,7 +177,7 @@ export const ReviewItem = forwardRef<HTMLElement, ReviewItemProps>(function Revi
 
       {bulkResult && (
         <Notice tone={bulkResult.ok ? "success" : "error"} title={bulkResult.ok ? "Decided in the bulk action" : "Not decided in the bulk action"}>
-          {!bulkResult.ok && <p>{bulkResult.error}</p>}
+          {!bulkResult.ok && <p>{withoutReloadHint(bulkResult.error ?? "")} The row now shows the strip as it is.</p>}
         </Notice>
       )}
 
@@ -221,6 +221,7 @@ export const ReviewItem = forwardRef<HTMLElement, ReviewItemProps>(function Revi
             action={panel.action}
             expectedVersion={panel.version}
             onCancel={onClose}
+            onLate={() => onChanged(strip.id)}
             onDone={() => {
               onClose();
               onChanged(strip.id);

@@ -15,7 +15,7 @@ export function ShortcutHelp() {
           ))}
         </ul>
         <p className="mt-2 text-ink-muted">
-          Decisions still ask for a reason before anything is saved. Shortcuts are off while you type in a box or a decision form is open;
+          Decisions still ask for a reason before anything is saved. Shortcuts rest while you type in a box or work in a decision form;
           Escape closes the form.
         </p>
       </div>

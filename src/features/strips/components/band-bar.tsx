@@ -9,7 +9,7 @@ const pct = (f: number) => `${(Math.min(1, Math.max(0, f)) * 100).toFixed(2)}%`;
 function barGradient(bands: BarBand[]): string {
   const sorted = [...bands].sort((a, b) => a.start - b.start);
   if (sorted.length === 0) return "none";
-  if (sorted.length === 1) return sorted[0]!.hex;
+  if (sorted.length === 1) return `linear-gradient(${sorted[0]!.hex}, ${sorted[0]!.hex})`;
   const stops = sorted.flatMap((b) => [`${b.hex} ${pct(b.start)}`, `${b.hex} ${pct(b.end)}`]);
   return `linear-gradient(90deg, ${stops.join(", ")})`;
 }

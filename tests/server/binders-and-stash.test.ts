@@ -68,6 +68,9 @@ describe("binders", () => {
     const list = (await request(t.app).get(`/api/members/${maraId}/binders`)).body.items;
     expect(list.map((b: { id: number }) => b.id)).not.toContain(binder.id);
     expect((await mara.get(`/api/binders/${binder.id}`).expect(200)).body.name).toBe("Secret stash plans");
+    // The owner sees their own private binders on their profile.
+    const own = (await mara.get(`/api/members/${maraId}/binders`).expect(200)).body.items;
+    expect(own.map((b: { id: number }) => b.id)).toContain(binder.id);
   });
 
   it("a strip hidden later disappears for others but stays listed for the owner as no longer available", async () => {

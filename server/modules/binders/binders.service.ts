@@ -94,7 +94,7 @@ export function createBindersService(deps: { db: Db }) {
         .selectFrom("binders")
         .selectAll()
         .where("owner_id", "=", memberId)
-        .where((eb) => (viewer?.id === memberId ? eb.val(true) : eb("visibility", "=", "public")))
+        .$if(viewer?.id !== memberId, (qb) => qb.where("visibility", "=", "public"))
         .orderBy("updated_at", "desc")
         .execute();
       return summaries(rows, viewer);

@@ -97,6 +97,16 @@ function MobileMenu({ id, onClose }: { id: string; onClose: () => void }) {
                 </NavLink>
               </li>
               <li>
+                <NavLink to="/binders" className={navLinkClasses} onClick={onClose}>
+                  Binders
+                </NavLink>
+              </li>
+              <li>
+                <NavLink to="/stash" className={navLinkClasses} onClick={onClose}>
+                  Stash
+                </NavLink>
+              </li>
+              <li>
                 <NavLink to="/account" className={navLinkClasses} onClick={onClose}>
                   Account
                 </NavLink>

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { StashSwatches } from "../../features/stash/components/stash-swatches";
 import type { Me } from "../../../shared/schemas/accounts";
 import { Card } from "../../components/ui/card";
 import { Notice } from "../../components/ui/notice";
@@ -82,10 +83,16 @@ export default function AccountPage() {
                 <PasswordForm email={me.email} hasPassword={me.hasPassword} />
               </Card>
             </div>
-            <Card className="self-start">
-              <h2 className="mb-2 text-xl font-bold">About your account</h2>
-              <AccountFacts me={me} />
-            </Card>
+            <div className="flex flex-col gap-6 self-start">
+              <Card>
+                <h2 className="mb-2 text-xl font-bold">About your account</h2>
+                <AccountFacts me={me} />
+              </Card>
+              <Card>
+                <h2 className="mb-3 text-xl font-bold">Your stash</h2>
+                <StashSwatches />
+              </Card>
+            </div>
           </div>
         </>
       )}

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { InYourStashNote } from "../../features/stash/components/in-your-stash-note";
 import { Link, useParams } from "react-router";
 import { Button } from "../../components/ui/button";
 import { Card } from "../../components/ui/card";
@@ -107,6 +108,7 @@ function InkDetail({ id }: { id: number }) {
             <InkTypeBadge type={data.type} />
             {data.discontinued && <DiscontinuedBadge />}
             <span className="text-ink-soft">{words}</span>
+            <InYourStashNote inkId={data.id} />
           </p>
         </div>
         {canModerate(me?.role) && !editing && (

@@ -5,6 +5,7 @@ import { Loading } from "../../components/ui/loading";
 import { Notice } from "../../components/ui/notice";
 import { DocumentTitle } from "../../components/ui/page-header";
 import { useMe } from "../../features/accounts/api/get-me";
+import { MemberBinders } from "../../features/binders/components/member-binders";
 import { MemberModerationPanel } from "../../features/review/components/member-moderation-panel";
 import { canModerate } from "../../lib/roles";
 import { useMember } from "../../features/strips/api/get-member";
@@ -100,6 +101,7 @@ function MemberDetail({ id }: { id: string }) {
           <StripList strips={published} label={`Strips by ${data.name}`} hideAuthor eagerCount={2} />
         )}
       </section>
+      <MemberBinders memberId={data.id} />
     </div>
   );
 }

@@ -10,6 +10,7 @@ import { DocumentTitle } from "../../components/ui/page-header";
 import { toast } from "../../components/ui/toast";
 import { useMe } from "../../features/accounts/api/get-me";
 import { InkPicker } from "../../features/inks/components/ink-picker";
+import { SaveToBinderButton } from "../../features/binders/components/save-to-binder-button";
 import { ReportStripButton } from "../../features/review/components/report-strip-button";
 import { useRelatedStrips } from "../../features/strips/api/get-related-strips";
 import { useStrip } from "../../features/strips/api/get-strip";
@@ -116,9 +117,10 @@ function StripView({ strip, isAuthor, signedIn, onEdit }: { strip: Strip; isAuth
         </div>
       )}
 
-      {!isAuthor && signedIn && strip.status === "published" && (
-        <div className="flex flex-wrap gap-3">
-          <ReportStripButton stripId={strip.id} />
+      {strip.status === "published" && (
+        <div className="flex flex-wrap items-start gap-3">
+          <SaveToBinderButton stripId={strip.id} saves={strip.saves} />
+          {!isAuthor && signedIn && <ReportStripButton stripId={strip.id} />}
         </div>
       )}
 

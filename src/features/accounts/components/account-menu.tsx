@@ -4,7 +4,7 @@ import type { Me } from "../../../../shared/schemas/accounts";
 import { RoleBadge } from "./role-badge";
 import { SignOutButton } from "./sign-out-button";
 
-/** The signed-in member's name, opening a small menu: Your strips, Account, Sign out. */
+/** The signed-in member's name, opening a small menu: Your strips, Binders, Stash, Account, Sign out. */
 export function AccountMenu({ me }: { me: Me }) {
   const id = useId();
   const [open, setOpen] = useState(false);
@@ -66,6 +66,16 @@ export function AccountMenu({ me }: { me: Me }) {
           <li>
             <Link to={`/members/${me.id}`} className={itemClasses} onClick={() => setOpen(false)}>
               Your strips
+            </Link>
+          </li>
+          <li>
+            <Link to="/binders" className={itemClasses} onClick={() => setOpen(false)}>
+              Binders
+            </Link>
+          </li>
+          <li>
+            <Link to="/stash" className={itemClasses} onClick={() => setOpen(false)}>
+              Stash
             </Link>
           </li>
           <li>

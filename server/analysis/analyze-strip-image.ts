@@ -4,7 +4,7 @@ import { analyzePixels } from "./analyze-pixels";
 import type { AnalysisResult, CatalogueInk, WhitePoint } from "./types";
 
 /** Long edge of the copy the analysis reads (fast, and plenty for colour bands). */
-export const ANALYSIS_LONG_EDGE = 1000;
+export const ANALYSIS_LONG_EDGE = 800;
 /** Long edge decoded from the upload; the display derivative is made at this size. */
 const DECODE_LONG_EDGE = 1600;
 

@@ -1,6 +1,6 @@
 // Finds the unblended white cardstock around the strip and builds the correction that maps it to
 // the D65 white: a smooth brightness field (vignetting, uneven light) and a Bradford adaptation.
-import { bradfordMatrix } from "./bradford";
+import { BRADFORD, bradfordMatrix } from "./bradford";
 import { D65_WHITE, SRGB8_TO_LINEAR, SRGB_TO_XYZ, mul3, mulVec3, srgbEncode } from "./srgb-lab";
 import type { RgbImage, WhitePoint } from "./types";
 
@@ -28,6 +28,9 @@ const CHROMA_TOLERANCE = 0.014; // how far from the modal chromaticity a paper p
 const FIELD_BAND = [0.9, 1.08] as const; // a paper sample lies within this ratio of the fitted field
 const MIN_BORDER_PAPER = 0.3; // share of the image border that must be paper …
 const MIN_TOTAL_PAPER = 0.25; // … or share of the whole image
+// Largest spread of Bradford cone gains (max/min) a detected paper may need. CIE illuminant A
+// (incandescent) needs about 4.05; a saturated yellow ink would need 6 or more.
+const MAX_CONE_GAIN_RATIO = 5;
 
 const Y_ROW = [SRGB_TO_XYZ[3], SRGB_TO_XYZ[4], SRGB_TO_XYZ[5]];
 
@@ -240,6 +243,16 @@ function fitField(s: Samples, paper: Int32Array): { field: PaperField; kept: Int
   return { field, kept };
 }
 
+/** max/min of the Bradford cone gains that take this white to D65. */
+function coneGainRatio(whiteLinear: [number, number, number]): number {
+  const xyz = mulVec3(SRGB_TO_XYZ, whiteLinear);
+  const s = mulVec3(BRADFORD, xyz.map((v) => v / Math.max(1e-9, xyz[1])));
+  const d = mulVec3(BRADFORD, D65_WHITE);
+  const g = [d[0] / s[0], d[1] / s[1], d[2] / s[2]];
+  if (g.some((v) => !(v > 0))) return Infinity;
+  return Math.max(...g) / Math.min(...g);
+}
+
 function correctionFor(whiteLinear: [number, number, number]): number[] {
   const whiteXyz = mulVec3(SRGB_TO_XYZ, whiteLinear);
   return mul3(bradfordMatrix(whiteXyz, D65_WHITE), SRGB_TO_XYZ);
@@ -345,6 +358,8 @@ export function findPaperWhite(img: RgbImage, white?: WhitePoint): PaperEstimate
     normalised = [c[0] / refLum, c[1] / refLum, c[2] / refLum];
     measured = c;
   }
+  // A "paper" that would need an extreme correction is a pale ink filling the frame, not paper.
+  if (!white && coneGainRatio(normalised) > MAX_CONE_GAIN_RATIO) return noPaper();
   return { found: true, measuredLinear: measured, field, correction: correctionFor(normalised), paperSamples: kept.length };
 }
 

@@ -60,7 +60,7 @@ export function robustLab(samples: number[][]): [number, number, number] {
 }
 
 export function readProfile(img: LabImage, g: StripGeometry): Profile {
-  const n = Math.max(60, Math.min(400, Math.round(g.length / 2)));
+  const n = Math.max(60, Math.min(300, Math.round(g.length / 2)));
   const lab = new Float64Array(n * 3);
   const step = g.length / n;
   const stepV = Math.max(1, (INNER_SHARE * g.thickness) / 31);

@@ -1,5 +1,6 @@
-// Optimal 1-D segmentation of a colour profile into bands (flat) and transitions (ramps) by
+// Optimal 1-D segmentation of a colour profile into bands (flat) and transitions (blends) by
 // dynamic programming with a penalty per band. See docs/decisions/002-strip-segmentation.md.
+import { SRGB_TO_XYZ, XYZ_TO_SRGB, labToXyz, mulVec3, xyzToLabInto } from "./srgb-lab";
 
 export type Segment = { from: number; to: number }; // sample indices, [from, to)
 
@@ -14,6 +15,11 @@ export type SegmentParams = {
   maxBands: number;
   /** Shortest band, as a share of the profile. */
   minBandShare: number;
+  /**
+   * Longest transition, as a share of the profile. Blends on a strip are short; without a cap a
+   * long straight "blend" could stand in for a staircase of several flat bands.
+   */
+  maxTransitionShare: number;
   /** Longest unread stretch at either end, as a share of the profile. */
   maxMarginShare: number;
   /** Profile noise (per channel, ΔE units) that the costs are tuned for; more noise scales costs down. */
@@ -21,10 +27,11 @@ export type SegmentParams = {
 };
 
 export const DEFAULT_SEGMENT_PARAMS: SegmentParams = {
-  beta: 150,
-  gamma: 6,
+  beta: 300,
+  gamma: 2,
   maxBands: 6,
   minBandShare: 0.03,
+  maxTransitionShare: 0.15,
   maxMarginShare: 0.02,
   referenceSigma: 0.6,
 };
@@ -52,7 +59,7 @@ export function profileNoise(lab: Float64Array, n: number): number {
   return Math.sqrt(d[d.length >> 1] / (2 * 2.366));
 }
 
-class PrefixSums {
+export class PrefixSums {
   readonly s1: Float64Array;
   readonly s2: Float64Array;
   readonly st: Float64Array;
@@ -84,6 +91,29 @@ class PrefixSums {
     return Math.max(0, sse);
   }
 
+  /**
+   * Sum of squared distances from a straight blend between the colour just before i (mean of
+   * `w` samples) and the colour at j onwards: a transition must lead from one band to the next.
+   */
+  bridge(i: number, j: number, n: number, w: number): number {
+    const m = j - i;
+    if (m <= 0) return 0;
+    const a0 = Math.max(0, i - w);
+    const b1 = Math.min(n, j + w);
+    let sse = this.s2[j] - this.s2[i];
+    const k2 = (m * (m + 1) * (2 * m + 1)) / 6 / ((m + 1) * (m + 1));
+    for (let c = 0; c < 3; c++) {
+      const A = i > a0 ? (this.s1[i * 3 + c] - this.s1[a0 * 3 + c]) / (i - a0) : this.s1[(i + 1) * 3 + c] - this.s1[i * 3 + c];
+      const B = b1 > j ? (this.s1[b1 * 3 + c] - this.s1[j * 3 + c]) / (b1 - j) : this.s1[j * 3 + c] - this.s1[(j - 1) * 3 + c];
+      const D = B - A;
+      const S1 = this.s1[j * 3 + c] - this.s1[i * 3 + c];
+      const ST = this.st[j * 3 + c] - this.st[i * 3 + c];
+      const weighted = (ST - (i - 1) * S1 - (A * m * (m + 1)) / 2) / (m + 1);
+      sse += -2 * A * S1 + m * A * A - 2 * D * weighted + D * D * k2;
+    }
+    return Math.max(0, sse);
+  }
+
   /** Sum of squared residuals of the best straight line through the segment, per channel. */
   ramp(i: number, j: number): number {
     const n = j - i;
@@ -103,9 +133,60 @@ class PrefixSums {
   }
 }
 
+/** Optical density (−ln reflectance) of a CIELAB colour, per linear-sRGB channel. */
+function density(l: number, a: number, b: number): [number, number, number] {
+  const rgb = mulVec3(XYZ_TO_SRGB, labToXyz(l, a, b));
+  return [-Math.log(Math.max(1e-4, rgb[0])), -Math.log(Math.max(1e-4, rgb[1])), -Math.log(Math.max(1e-4, rgb[2]))];
+}
+
 /**
- * Minimises Σ bands (flat SSE + β) + Σ transitions (ramp SSE + γ·length) over all layouts
- * margin · band · (transition · band)* · margin with 1..maxBands bands. O(maxBands · n²).
+ * SSE (in CIELAB) of a blend that is straight in optical density between the mean colour of the
+ * w samples before i and of the w samples from j on: dye laid over dye multiplies reflectance
+ * (Beer–Lambert), so layered blends are straight in density and curved in CIELAB.
+ * Returned as table[i * (maxT + 1) + (j − i)] for 1 ≤ j − i ≤ maxT.
+ */
+function densityBridgeTable(lab: Float64Array, n: number, w: number, maxT: number): Float64Array {
+  const table = new Float64Array((n + 1) * (maxT + 1)).fill(Infinity);
+  const mean = (from: number, to: number) => {
+    const m = [0, 0, 0];
+    for (let t = from; t < to; t++) for (let c = 0; c < 3; c++) m[c] += lab[t * 3 + c] / (to - from);
+    return m;
+  };
+  const dens: [number, number, number][] = [];
+  for (let j = 0; j < n; j++) {
+    const m = mean(j, Math.min(n, j + w));
+    dens.push(density(m[0], m[1], m[2]));
+  }
+  const out = [0, 0, 0];
+  const M = SRGB_TO_XYZ;
+  for (let i = 1; i < n; i++) {
+    const a = mean(Math.max(0, i - w), i);
+    const dA = density(a[0], a[1], a[2]);
+    for (let m = 1; m <= maxT && i + m < n; m++) {
+      const dB = dens[i + m];
+      let sse = 0;
+      for (let t = i; t < i + m; t++) {
+        const f = (t - i + 1) / (m + 1);
+        const r = Math.exp(-((1 - f) * dA[0] + f * dB[0]));
+        const g = Math.exp(-((1 - f) * dA[1] + f * dB[1]));
+        const b = Math.exp(-((1 - f) * dA[2] + f * dB[2]));
+        xyzToLabInto(M[0] * r + M[1] * g + M[2] * b, M[3] * r + M[4] * g + M[5] * b, M[6] * r + M[7] * g + M[8] * b, out, 0);
+        const dl = lab[t * 3] - out[0];
+        const da = lab[t * 3 + 1] - out[1];
+        const db = lab[t * 3 + 2] - out[2];
+        sse += dl * dl + da * da + db * db;
+      }
+      table[i * (maxT + 1) + m] = sse;
+    }
+  }
+  return table;
+}
+
+/**
+ * Minimises Σ bands (flat SSE + β) + Σ transitions (SSE from a blend between the neighbouring
+ * bands, straight in CIELAB or in optical density, whichever fits better, + γ·length) + end margins (free line SSE + γ·length) over all layouts
+ * margin · band · (transition · band)* · margin with 1..maxBands bands.
+ * O(maxBands · n²) plus O(n · maxTransition²) for the density blends.
  */
 export function segmentProfile(lab: Float64Array, n: number, params: SegmentParams = DEFAULT_SEGMENT_PARAMS): SegmentResult {
   const sigma = profileNoise(lab, n);
@@ -113,10 +194,16 @@ export function segmentProfile(lab: Float64Array, n: number, params: SegmentPara
   const ps = new PrefixSums(lab, n);
   const minBand = Math.max(3, Math.round(params.minBandShare * n));
   const maxMargin = Math.max(1, Math.round(params.maxMarginShare * n));
+  const maxTransition = Math.max(1, Math.round(params.maxTransitionShare * n));
   const K = params.maxBands;
   const beta = (params.beta * n) / 100;
   const flat = (i: number, j: number) => ps.flat(i, j) / scale + beta;
   const ramp = (i: number, j: number) => (j > i ? ps.ramp(i, j) / scale + params.gamma * (j - i) : 0);
+  // Each end of a transition is anchored on the mean of a shortest-band's worth of samples, all
+  // inside the neighbouring bands, so a band cannot cheat by ending on a few samples of the next.
+  const dTable = densityBridgeTable(lab, n, minBand, maxTransition);
+  const bridge = (i: number, j: number) =>
+    j > i ? Math.min(ps.bridge(i, j, n, minBand), dTable[i * (maxTransition + 1) + (j - i)]) / scale + params.gamma * (j - i) : 0;
 
   // B[k][j]: best cost of [0, j) whose last segment is band k ending at j.
   // T[k][j]: best cost of [0, j) after band k and a (possibly empty) transition ending at j.
@@ -144,9 +231,9 @@ export function segmentProfile(lab: Float64Array, n: number, params: SegmentPara
     for (let j = 0; j <= n; j++) {
       let best = B[k][j];
       let arg = j;
-      for (let i = 0; i < j; i++) {
+      for (let i = Math.max(0, j - maxTransition); i < j; i++) {
         if (B[k][i] === Infinity) continue;
-        const c = B[k][i] + ramp(i, j);
+        const c = B[k][i] + bridge(i, j);
         if (c < best) {
           best = c;
           arg = i;

@@ -10,6 +10,8 @@ import { useSafeSharp } from "./safe-sharp";
 export const DISPLAY_LONG_EDGE = 1600;
 export const THUMB_LONG_EDGE = 480;
 const WEBP_QUALITY = 82;
+// libwebp effort 2 of 0–6: about a third of the time of the default (4) at a few % larger files.
+const WEBP_EFFORT = 2;
 
 export type EncodedImage = { data: Buffer; width: number; height: number };
 
@@ -35,7 +37,7 @@ async function encodeWebp(img: DecodedImage, longEdge: number): Promise<EncodedI
   // Input is raw pixels, so there is no metadata to carry; sharp's default output adds none.
   const { data, info } = await rawInput(img)
     .resize(longEdge, longEdge, { fit: "inside", withoutEnlargement: true })
-    .webp({ quality: WEBP_QUALITY })
+    .webp({ quality: WEBP_QUALITY, effort: WEBP_EFFORT })
     .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height };
 }

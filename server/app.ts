@@ -18,6 +18,8 @@ import { devMailRouter } from "./modules/dev/dev-mail.router";
 import { inksRouter } from "./modules/inks/inks.router";
 import { bindersRouter } from "./modules/binders/binders.router";
 import { moderationRouter } from "./modules/moderation/moderation.router";
+import { lookAlikesRouter } from "./modules/search/look-alikes.router";
+import { stashInkIds } from "./modules/stash/stash.service";
 import { stashRouter } from "./modules/stash/stash.router";
 import { stripsRouter } from "./modules/strips/strips.router";
 import { uploadsRouter } from "./modules/uploads/uploads.router";
@@ -90,6 +92,7 @@ export function createApp(deps: AppDeps) {
   api.use(moderationRouter(deps.services.moderation, scale));
   api.use(bindersRouter(deps.services.binders));
   api.use(stashRouter(deps.services.stash));
+  api.use(lookAlikesRouter(db, { stashOf: async (userId) => new Set(await stashInkIds(db, userId)) }));
   if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);
   app.use("/api", api);

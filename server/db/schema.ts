@@ -1,3 +1,4 @@
+import type { SearchTables } from "../modules/search/search-tables";
 import type { Generated, Insertable, Selectable, Updateable } from "kysely";
 
 // Types match what SQLite returns: booleans as 0/1, timestamps as ISO text.
@@ -214,7 +215,7 @@ export interface StashItemTable {
   added_at: string;
 }
 
-export interface Database {
+export interface Database extends SearchTables {
   User: UserTable;
   Account: AccountTable;
   Session: SessionTable;

@@ -1,6 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
-import { stripIdParams, stripInput, stripListQuery, stripPatch } from "../../../shared/schemas/strips";
+import { stripSearchQuery } from "../../../shared/schemas/search";
+import { stripIdParams, stripInput, stripPatch } from "../../../shared/schemas/strips";
 import { requireUser } from "../../auth/current-user";
 import { memberLimit } from "../../middleware/member-limits";
 import { validate } from "../../middleware/validate";
@@ -12,8 +13,8 @@ const memberParams = z.strictObject({ id: z.string().uuid() });
 export function stripsRouter(strips: StripsService, limitScale = 1): Router {
   const router = Router();
 
-  router.get("/strips", validate({ query: stripListQuery }), async (req, res) => {
-    res.json(await strips.list(req.query as never));
+  router.get("/strips", validate({ query: stripSearchQuery }), async (req, res) => {
+    res.json(await strips.search(req.query as never));
   });
 
   const postLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 10, trusted: 60, message: "You have posted many strips in the last hour. Please wait a while.", scale: limitScale });

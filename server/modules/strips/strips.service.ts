@@ -2,15 +2,16 @@ import type { z } from "zod";
 import { deltaE2000, type Lab } from "../../../shared/colour";
 import type { Me } from "../../../shared/schemas/accounts";
 import type { Analysis } from "../../../shared/schemas/uploads";
-import type { Strip, StripList, StripListQuery, stripInput, stripPatch, MemberProfile } from "../../../shared/schemas/strips";
+import type { Strip, stripInput, stripPatch, MemberProfile } from "../../../shared/schemas/strips";
 import { nowIso, type Db, type DbOrTx } from "../../db/client";
 import type { StripRow } from "../../db/schema";
 import { AppError, notFound } from "../../middleware/errors";
 import type { FileStore } from "../../storage/file-store";
 import { phashDistance } from "../../images";
+import type { StripSearchQuery } from "../../../shared/schemas/search";
+import { searchStripList } from "../search/search.service";
 import { cleanNotes } from "./notes-html";
 import * as repo from "./strips.repository";
-import { decodeCursor, encodeCursor } from "./cursor";
 
 type StripInput = z.output<typeof stripInput>;
 type StripPatch = z.output<typeof stripPatch>;
@@ -202,20 +203,9 @@ export function createStripsService(deps: { db: Db; store: FileStore }) {
       return (await hydrate(db, [row]))[0]!;
     },
 
-    async list(q: StripListQuery): Promise<StripList> {
-      const after = q.cursor ? decodeCursor(q.cursor, q.sort) : undefined;
-      const rows = await repo.listStrips(db, {
-        inks: q.ink,
-        authorId: q.author,
-        statuses: ["published"],
-        sort: q.sort,
-        after,
-        limit: q.limit + 1,
-      });
-      const page = rows.slice(0, q.limit);
-      const last = page[page.length - 1];
-      const nextCursor = rows.length > q.limit && last ? encodeCursor(q.sort, last) : null;
-      return { items: await hydrate(db, page), nextCursor };
+    /** The gallery and every search: published strips only, by inks, colours, brand, type, paper… */
+    search(q: StripSearchQuery) {
+      return searchStripList(db, q, hydrate);
     },
 
     async related(id: number, viewer: Me | null, limit = 6): Promise<Strip[]> {

@@ -106,5 +106,16 @@ export function analyzePixels(img: RgbImage, opts: AnalyzeOptions): AnalysisResu
     },
     bands,
     transitions,
+    strip: stripOutline(m.geometry, img.width, img.height),
+  };
+}
+
+/** The strip's centre line and thickness as fractions of the image, for drawing its bands on the photo. */
+function stripOutline(g: StripGeometry, width: number, height: number) {
+  const end: [number, number] = [g.origin[0] + g.along[0] * g.length, g.origin[1] + g.along[1] * g.length];
+  return {
+    start: { x: round(g.origin[0] / width, 4), y: round(g.origin[1] / height, 4) },
+    end: { x: round(end[0] / width, 4), y: round(end[1] / height, 4) },
+    thickness: round(g.thickness / Math.max(width, height), 4),
   };
 }

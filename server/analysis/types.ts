@@ -39,4 +39,6 @@ export type AnalysisResult = {
   paper: { found: boolean; hex: string; lab: Lab };
   bands: AnalysisBand[];
   transitions: AnalysisTransition[];
+  /** Centre line (fractions of width and height) and thickness (fraction of the long edge). */
+  strip?: { start: { x: number; y: number }; end: { x: number; y: number }; thickness: number };
 };

@@ -31,6 +31,8 @@ export type Analysis = {
   paper: { found: boolean; hex: string; lab: LabValue };
   bands: AnalysisBand[];
   transitions: { start: number; end: number }[];
+  /** Centre line (fractions of width and height) and thickness (fraction of the long edge). */
+  strip?: { start: { x: number; y: number }; end: { x: number; y: number }; thickness: number };
 };
 
 export type UploadImages = { display: string; thumb: string; placeholder: string };

@@ -61,6 +61,13 @@ describe("uploading a strip photo", () => {
       expect(band.suggestions.slice(0, 3).map((s) => s.inkId)).toContain(chosen[i]!.id);
     });
     expect(analysis.transitions).toHaveLength(2);
+    // The strip's outline for drawing bands on the photo: the synthetic strip spans the middle
+    // 75% of the width, centred, 12% of the width thick (known truth of the generated photo).
+    expect(analysis.strip!.start.x).toBeCloseTo(0.125, 1);
+    expect(analysis.strip!.end.x).toBeCloseTo(0.875, 1);
+    expect((analysis.strip!.start.y + analysis.strip!.end.y) / 2).toBeCloseTo(0.5, 1);
+    expect(analysis.strip!.thickness).toBeGreaterThan(0.08);
+    expect(analysis.strip!.thickness).toBeLessThan(0.16);
     expect(upload.images?.display).toBe(`/api/uploads/${res.body.id}/images/display`);
 
     // The photo members see is corrected: the paper above the strip (warm D50 cast in the

@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState, type ReactNode } from "react";
+import { useStash } from "../../features/stash/api/get-stash";
 import { Link, useNavigate, useSearchParams } from "react-router";
 import type { Me } from "../../../shared/schemas/accounts";
 import type { AnalysisBand, InkSuggestion, Upload } from "../../../shared/schemas/uploads";
@@ -212,6 +213,9 @@ function UploadStage({ uploadId, me, onStartOver }: { uploadId: string; me: Me; 
   }
 
   const suggestionIds = lastReady ? lastReady.analysis.bands.flatMap((b) => b.suggestions.map((s) => s.inkId)) : [];
+  // The member's own inks come first in the picker.
+  const stash = useStash();
+  const stashIds = new Set(stash.data?.map((i) => i.ink.id));
   const catalogue = useInksById([...suggestionIds, ...inks.map((i) => i.id)]);
   const inkColour: InkColourLookup = (id) => {
     const ink = catalogue.get(id);
@@ -223,7 +227,7 @@ function UploadStage({ uploadId, me, onStartOver }: { uploadId: string; me: Me; 
       chosenIds={chosenIds}
       disabled={disabled}
       hint="Type part of an ink's name. It is added at the end; move it into place."
-      // When the stash exists, pass stashInkIds here so the member's own inks come first.
+      stashInkIds={stashIds}
       onPick={(ink) => onPick({ id: ink.id, name: ink.name, brand: ink.brand.name, hex: ink.hex, lab: ink.lab })}
     />
   );

@@ -1,3 +1,4 @@
+import type { Strip } from "../../../../shared/schemas/strips";
 import type { ReactNode } from "react";
 import { Button } from "../../../components/ui/button";
 import { Loading } from "../../../components/ui/loading";
@@ -15,10 +16,11 @@ type StripFeedProps = {
   /** Offer "Load more" (cursor pages); off for short previews such as the home page's. */
   loadMore?: boolean;
   eagerCount?: number;
+  actions?: (strip: Strip) => ReactNode;
 };
 
 /** Published strips from GET /api/strips, newest or most saved first, with "Load more". */
-export function StripFeed({ filters, label, empty, loadMore = true, eagerCount = 2 }: StripFeedProps) {
+export function StripFeed({ filters, label, empty, loadMore = true, eagerCount = 2, actions }: StripFeedProps) {
   const strips = useStrips(filters);
 
   if (strips.isPending) return <Loading label="Loading strips…" />;
@@ -38,7 +40,7 @@ export function StripFeed({ filters, label, empty, loadMore = true, eagerCount =
 
   return (
     <div className="flex flex-col gap-6" aria-busy={strips.isFetching}>
-      <StripList strips={items} label={label} eagerCount={eagerCount} />
+      <StripList strips={items} label={label} eagerCount={eagerCount} actions={actions} />
       {strips.isError && (
         <Notice tone="error" title={strips.isFetchNextPageError ? "More strips could not be loaded" : "The strips could not be updated"} live>
           <p>{errorMessage(strips.error)}</p>

@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import { Link } from "react-router";
 import type { Strip } from "../../../../shared/schemas/strips";
 import { formatDate, plural } from "../../../lib/format";
@@ -13,10 +14,12 @@ type StripRowProps = {
   hideAuthor?: boolean;
   eager?: boolean;
   headingLevel?: 2 | 3;
+  /** Controls from other features (e.g. saving to a binder), placed under the row's facts. */
+  actions?: ReactNode;
 };
 
 /** One strip as a full-width band: the photo, then its ink chips, author, date and saves. */
-export function StripRow({ strip, showStatus = false, hideAuthor = false, eager = false, headingLevel = 3 }: StripRowProps) {
+export function StripRow({ strip, showStatus = false, hideAuthor = false, eager = false, headingLevel = 3, actions }: StripRowProps) {
   const Heading = headingLevel === 2 ? "h2" : "h3";
   const date = strip.publishedAt ?? strip.createdAt;
   return (
@@ -53,6 +56,7 @@ export function StripRow({ strip, showStatus = false, hideAuthor = false, eager 
             <span>{plural(strip.saves, "save")}</span>
           </p>
         </div>
+        {actions && <div className="relative z-10 flex flex-wrap items-center gap-2">{actions}</div>}
         {showStatus && strip.status !== "published" && (
           <div className="flex flex-wrap items-center gap-2 text-sm">
             <StripStatusBadge status={strip.status} />

@@ -29,7 +29,7 @@ export default function GalleryPage() {
       <StripFeed
         filters={{ sort, limit: GALLERY_PAGE_SIZE }}
         label={sort === "saves" ? "Most saved strips" : "Newest strips"}
-        actions={(strip) => <SaveToBinderButton stripId={strip.id} saves={strip.saves} />}
+        actions={(strip) => <SaveToBinderButton stripId={strip.id} />}
         empty={
           <div className="rounded-xl border-2 border-dashed border-rule-strong bg-card/60 px-5 py-10 text-center">
             <p className="text-xl font-bold">No strips yet</p>

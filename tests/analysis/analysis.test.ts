@@ -166,8 +166,10 @@ describe("analyzeStripImage", () => {
     const path = join(dir, "three.jpg");
     await writeFile(path, await sceneToJpeg(renderScene(scene()), 85));
     const r = await analyzeStripImage(path, { catalogue });
-    expect(Object.keys(r).sort()).toEqual(["bands", "orientation", "paper", "transitions"]);
+    expect(Object.keys(r).sort()).toEqual(["bands", "orientation", "paper", "strip", "transitions"]);
     expect(r.orientation).toBe("horizontal");
+    expect(Object.keys(r.strip!).sort()).toEqual(["end", "start", "thickness"]);
+    expect(r.strip!.start.x).toBeLessThan(r.strip!.end.x);
     expect(Object.keys(r.paper).sort()).toEqual(["found", "hex", "lab"]);
     expect(r.paper.found).toBe(true);
     expect(r.bands.map((b) => b.suggestions[0].inkId)).toEqual([1001, 1002, 1003]);

@@ -18,6 +18,15 @@ import { Piscina } from "piscina";
 import sharp from "sharp";
 import { processStripPhoto } from "../server/analysis/analyze-strip-image";
 import type { AnalysisTask, AnalysisTaskOutcome } from "../server/analysis/worker";
+import { once } from "node:events";
+import type { AddressInfo } from "node:net";
+import pino from "pino";
+import { createApp } from "../server/app";
+import { loadConfig } from "../server/config";
+import { openDatabase } from "../server/db/client";
+import { migrateToLatest } from "../server/db/migrate";
+import { createMailer } from "../server/mail/mailer";
+import { createServices } from "../server/services";
 import { hexToLab } from "../shared/colour/index";
 import { renderScene, sceneToJpeg, syntheticCatalogue } from "../tests/analysis/support/synthetic";
 
@@ -31,12 +40,36 @@ const median = (xs: number[]) => {
 const round = (v: number, d = 1) => Math.round(v * 10 ** d) / 10 ** d;
 
 /**
- * Hook for the lead: once the HTTP side exists, measure GET /api/health latency while the
- * CONCURRENT analyses run (pass the pool's promise), and return the figure in ms. Whatever this
- * returns is added to the final JSON as "healthLatencyMs".
+ * p99 latency of GET /api/health on the real app, served from this process's event loop while
+ * the analyses run in the worker pool: if analysis ever blocked the main thread, this would show it.
  */
-async function healthLatencyDuringLoad(_load: Promise<unknown>): Promise<number | undefined> {
-  return undefined;
+async function healthLatencyDuringLoad(load: Promise<unknown>, dataDir: string): Promise<number> {
+  const config = loadConfig({ DATA_DIR: dataDir, NODE_ENV: "test", DEMO_MODE: "false" });
+  const db = openDatabase(config.dbFile);
+  await migrateToLatest(db);
+  const logger = pino({ level: "silent" });
+  const services = createServices({ db, config, logger, maxThreads: 1 });
+  const mailer = createMailer({ host: "127.0.0.1", port: 9 }, config.mailFrom);
+  const server = createApp({ db, config, mailer, logger, services }).listen(0, "127.0.0.1");
+  await once(server, "listening");
+  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/health`;
+  let done = false;
+  void load.finally(() => (done = true));
+  const times: number[] = [];
+  while (!done) {
+    const t = performance.now();
+    const res = await fetch(url);
+    await res.arrayBuffer();
+    times.push(performance.now() - t);
+    await new Promise((r) => setTimeout(r, 5));
+  }
+  await new Promise((r) => server.close(r));
+  await services.close();
+  mailer.close();
+  await db.destroy();
+  times.sort((a, b) => a - b);
+  console.log(`GET /api/health during the load: ${times.length} requests, p50 ${round(times[Math.floor(times.length * 0.5)] ?? 0)} ms, p99 ${round(times[Math.floor(times.length * 0.99)] ?? 0)} ms (target < 50)`);
+  return times[Math.min(times.length - 1, Math.floor(times.length * 0.99))] ?? 0;
 }
 
 async function main() {
@@ -93,7 +126,7 @@ async function main() {
     peak = process.memoryUsage().rss;
     const t = performance.now();
     const load = Promise.all(Array.from({ length: CONCURRENT * 2 }, (_, i) => pool.run(task(i)) as Promise<AnalysisTaskOutcome>));
-    const healthLatencyMs = await healthLatencyDuringLoad(load);
+    const healthP99Ms = await healthLatencyDuringLoad(load, join(dir, "app"));
     const outcomes = await load;
     const poolMs = performance.now() - t;
     clearInterval(sampler);
@@ -131,7 +164,7 @@ async function main() {
     console.log(`ratio ${ratio} (target ≤ 1.5)`);
 
     const figures: Record<string, number> = { analyzeMedianMs, sharpBaselineMedianMs, ratio, peakRssMb };
-    if (healthLatencyMs !== undefined) figures.healthLatencyMs = round(healthLatencyMs);
+    figures.healthP99Ms = round(healthP99Ms);
     console.log(JSON.stringify(figures));
   } finally {
     await rm(dir, { recursive: true, force: true });

@@ -28,7 +28,7 @@ import { migrateToLatest } from "../server/db/migrate";
 import { createMailer } from "../server/mail/mailer";
 import { createServices } from "../server/services";
 import { hexToLab } from "../shared/colour/index";
-import { renderScene, sceneToJpeg, syntheticCatalogue } from "../tests/analysis/support/synthetic";
+import { renderScene, sceneToJpeg, syntheticCatalogue } from "../server/demo/synthetic-photo";
 
 const RUNS = Number(process.env.BENCH_RUNS ?? 7);
 const CONCURRENT = 4;

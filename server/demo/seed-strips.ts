@@ -3,22 +3,10 @@ import path from "node:path";
 import { randomUUID } from "node:crypto";
 import type { Logger } from "pino";
 import { demoStripIdeas } from "../../scripts/demo/strip-ideas";
-import { renderScene, sceneToJpeg, survivesCast, castMatrix, type SceneSpec } from "./synthetic-photo";
+import { castMatrix, renderScene, sceneToJpeg, seededRandom, survivesCast, type SceneSpec } from "./synthetic-photo";
 import type { Db } from "../db/client";
 import { loadMe } from "../modules/accounts/accounts.service";
 import type { Services } from "../services";
-
-/** A small seeded random generator, so every fresh demo looks the same. */
-function seeded(seed: number) {
-  let s = seed >>> 0;
-  return () => {
-    s = (s + 0x6d2b79f5) >>> 0;
-    let t = s;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const CASTS = ["D65", "D50", "D75", "F2", "D50"] as const;
 
@@ -29,7 +17,7 @@ const CASTS = ["D65", "D50", "D75", "F2", "D50"] as const;
  */
 export async function seedDemoStrips(deps: { db: Db; services: Services; logger: Logger }) {
   const { db, services, logger } = deps;
-  const rand = seeded(2026);
+  const rand = seededRandom(2026);
   const inks = await db
     .selectFrom("inks")
     .innerJoin("brands", "brands.id", "inks.brand_id")

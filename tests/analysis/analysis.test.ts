@@ -16,7 +16,7 @@ import {
 } from "../../server/analysis/index";
 import { PrefixSums } from "../../server/analysis/segment-profile";
 import runAnalysisTask from "../../server/analysis/worker";
-import { renderScene, sceneToJpeg, seededRandom, syntheticCatalogue, type SceneSpec } from "./support/synthetic";
+import { renderScene, sceneToJpeg, seededRandom, syntheticCatalogue, type SceneSpec } from "../../server/demo/synthetic-photo";
 
 let dir: string;
 beforeAll(async () => {

@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { deltaE2000, srgbToLab } from "../../shared/colour/index";
 import { analyzeStripImage } from "../../server/analysis/index";
 import { RENDITION_CHART } from "./support/rendition-chart";
-import { ILLUMINANTS, castMatrix, renderScene, sceneToJpeg, survivesCast } from "./support/synthetic";
+import { ILLUMINANTS, castMatrix, renderScene, sceneToJpeg, survivesCast } from "../../server/demo/synthetic-photo";
 
 // CIE illuminants A (~2856 K), F2 (cool white fluorescent), D50, D65, D75 — warm to cool.
 const CASTS = ["A", "F2", "D50", "D65", "D75"] as const;

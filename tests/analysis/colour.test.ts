@@ -24,7 +24,7 @@ import {
   srgbEncode,
   xyzToLabInto,
 } from "../../server/analysis/srgb-lab";
-import { seededRandom } from "./support/synthetic";
+import { seededRandom } from "../../server/demo/synthetic-photo";
 
 const sharma = JSON.parse(readFileSync(new URL("../fixtures/analysis/ciede2000-sharma-2005.json", import.meta.url), "utf8")) as {
   pairs: number[][];

@@ -9,7 +9,7 @@ import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { deltaE2000 } from "../../shared/colour/index";
 import { analyzeStripImage, type AnalysisResult } from "../../server/analysis/index";
-import { randomStripCase, renderScene, sceneToJpeg, syntheticCatalogue, type StripCase } from "./support/synthetic";
+import { randomStripCase, renderScene, sceneToJpeg, syntheticCatalogue, type StripCase } from "../../server/demo/synthetic-photo";
 
 const SEEDS = Array.from({ length: 48 }, (_, i) => i + 1);
 const catalogue = syntheticCatalogue();

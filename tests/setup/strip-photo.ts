@@ -1,5 +1,5 @@
 import type { Ink } from "../../shared/schemas/inks";
-import { renderScene, sceneToJpeg, type SceneSpec } from "../analysis/support/synthetic";
+import { renderScene, sceneToJpeg, type SceneSpec } from "../../server/demo/synthetic-photo";
 
 /** A phone-like JPEG of a strip blended from the given catalogue inks, on white cardstock under a warm cast. */
 export async function stripPhoto(inks: Pick<Ink, "id" | "lab">[], opts: Partial<SceneSpec> & { quality?: number } = {}) {

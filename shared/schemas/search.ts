@@ -14,6 +14,9 @@ export const LOOK_ALIKE_DELTA_E = 5;
 
 export const searchSorts = ["newest", "saves", "closest"] as const;
 export type SearchSort = (typeof searchSorts)[number];
+/** By my stash: strips whose inks I all own, or strips missing exactly one of mine. */
+export const stashModes = ["all", "missingOne"] as const;
+export type StashMode = (typeof stashModes)[number];
 
 // A query parameter given once arrives as a string, given twice as an array.
 const repeatable = <T extends z.ZodType>(item: T, max: number, what: string) =>
@@ -61,6 +64,7 @@ export const stripSearchQuery = stripListQuery
       z.coerce.number({ error: "must be a number" }).int("must be a whole number").min(1, "must be at least 1").max(MAX_SEARCH_INKS, `must be at most ${MAX_SEARCH_INKS}`).optional(),
     ),
     paper: one(z.enum(papers, { error: "choose a paper from the list" }).optional()),
+    stash: one(z.enum(stashModes, { error: "must be all or missingOne" }).optional()),
     sort: one(z.enum(searchSorts, { error: "must be newest, saves or closest" }).optional()),
     cursor: one(z.string().max(200, "is not a valid cursor").optional()),
     limit: one(z.coerce.number({ error: "must be a number" }).int("must be a whole number").min(1, "must be at least 1").max(50, "must be at most 50").default(20)),
@@ -95,7 +99,11 @@ export type ColourMatch = {
   deltaE: number;
 };
 
-export type StripSearchResult = Strip & { match?: ColourMatch[] };
+export type StripSearchResult = Strip & {
+  match?: ColourMatch[];
+  /** With stash=missingOne: the one ink of this strip that the member does not own. */
+  missingInkId?: number;
+};
 
 export type StripSearchList = {
   items: StripSearchResult[];

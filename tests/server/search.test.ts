@@ -1,24 +1,16 @@
 // Search over HTTP: GET /api/strips with the search filters and GET /api/inks/:id/look-alikes,
-// on the real app's database (tests/setup/test-app.ts, demo catalogue). Until the lead wires
-// the search into the app's own GET /api/strips, a small Express app here mounts it the way it
-// will be mounted: validate(stripSearchQuery) → searchStripList(db, query, hydrate).
+// on the real app (tests/setup/test-app.ts, demo catalogue).
 // Strips are written straight into the database (a few hundred, with bands made from the
 // catalogue inks' reference colours), and every answer is compared with a naive model computed
 // here from the same data.
-import express from "express";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { differenceCiede2000 } from "culori";
 import { deltaE2000, hexToLab, labToHex, type Lab } from "../../shared/colour";
 import type { Ink } from "../../shared/schemas/inks";
-import { stripSearchQuery, type LookAlikeList, type StripSearchList, type StripSearchResult } from "../../shared/schemas/search";
+import { type LookAlikeList, type StripSearchList, type StripSearchResult } from "../../shared/schemas/search";
 import { papers, type StripStatus } from "../../shared/schemas/strips";
-import { apiNotFound, errorHandler } from "../../server/middleware/errors";
-import { validate } from "../../server/middleware/validate";
-import { lookAlikesRouter } from "../../server/modules/search/look-alikes.router";
-import { searchStripList } from "../../server/modules/search/search.service";
-import { hydrate } from "../../server/modules/strips/strips.service";
-import { createTestApp, type TestApp } from "../setup/test-app";
+import { createTestApp, DEMO, signedIn, type TestApp } from "../setup/test-app";
 
 /** mulberry32 (public domain), seeded so failures can be replayed. */
 function seeded(seed: number) {
@@ -43,7 +35,7 @@ type Model = {
 };
 
 let t: TestApp;
-let app: express.Express;
+let app: TestApp["app"];
 let inks: Ink[];
 const strips: Model[] = [];
 const rand = seeded(77);
@@ -68,15 +60,7 @@ async function insertStrip(m: Omit<Model, "id">, author: string, n: number) {
 
 beforeAll(async () => {
   t = await createTestApp();
-  app = express();
-  const api = express.Router();
-  api.get("/strips", validate({ query: stripSearchQuery }), async (req, res) => {
-    res.json(await searchStripList(t.db, req.query as never, hydrate));
-  });
-  api.use(lookAlikesRouter(t.db));
-  api.use(apiNotFound);
-  app.use("/api", api);
-  app.use(errorHandler);
+  app = t.app;
 
   inks = (await request(t.app).get("/api/inks?pageSize=100")).body.items;
   const more = (await request(t.app).get("/api/inks?pageSize=100&page=2")).body.items;
@@ -109,12 +93,12 @@ const newest = (a: Model, b: Model) => (a.publishedAt === b.publishedAt ? b.id -
 const mostSaved = (a: Model, b: Model) => b.saves - a.saves || b.id - a.id;
 
 /** Every page of a search, following nextCursor. */
-async function allPages(query: Record<string, string | string[]>, limit = 7) {
+async function allPages(query: Record<string, string | string[]>, limit = 7, agent: { get: (url: string) => request.Test } = request(app)) {
   const items: StripSearchResult[] = [];
   let cursor: string | null = null;
   let first: StripSearchList | null = null;
   for (let page = 0; page < 100; page++) {
-    const res = await request(app)
+    const res = await agent
       .get("/api/strips")
       .query({ ...query, limit: String(limit), ...(cursor && { cursor }) })
       .expect(200);
@@ -295,6 +279,45 @@ describe("finding combinations by colour", () => {
   });
 });
 
+describe("finding combinations by my stash", () => {
+  it("lists strips I can blend with what I own, and strips missing one ink with the ink to buy", async () => {
+    const member = await signedIn(t, DEMO.newMember);
+    // A stash of the 40 inks used most in published strips, so both lists have members.
+    const owned = new Set([...inks].sort((a, b) => countWith(b.id) - countWith(a.id) || a.id - b.id).slice(0, 40).map((i) => i.id));
+    await member.put("/api/stash").send({ items: [...owned].map((inkId) => ({ inkId })) }).expect(200);
+    const notOwned = (s: Model) => s.inks.filter((i) => !owned.has(i.id));
+
+    const blendable = published().filter((s) => notOwned(s).length === 0).sort(newest);
+    expect(blendable.length).toBeGreaterThan(3);
+    const all = await allPages({ stash: "all" }, 5, member);
+    expect(all.ids).toEqual(blendable.map((s) => s.id));
+    expect(all.total).toBe(blendable.length);
+    expect(all.items.every((s) => s.missingInkId === undefined)).toBe(true);
+
+    const oneShort = published().filter((s) => notOwned(s).length === 1).sort(mostSaved);
+    expect(oneShort.length).toBeGreaterThan(3);
+    const missing = await allPages({ stash: "missingOne", sort: "saves" }, 6, member);
+    expect(missing.ids).toEqual(oneShort.map((s) => s.id));
+    expect(missing.items.map((s) => s.missingInkId)).toEqual(oneShort.map((s) => notOwned(s)[0]!.id));
+
+    // The stash combines with the other filters (here an ink and a colour).
+    const some = blendable.find((s) => s.inks.length > 1) ?? blendable[0]!;
+    const withInk = await allPages({ stash: "all", ink: String(some.inks[0]!.id) }, 5, member);
+    expect(withInk.ids).toEqual(blendable.filter((s) => s.inks.some((i) => i.id === some.inks[0]!.id)).map((s) => s.id));
+    const colour = hexOf(some.bands[0]!);
+    const byColour = await allPages({ stash: "all", color: `#${colour}` }, 5, member);
+    expect(byColour.ids).toContain(some.id);
+    for (const id of byColour.ids) expect(blendable.map((s) => s.id)).toContain(id);
+  });
+
+  it("asks a visitor to sign in, and refuses a mode it does not know", async () => {
+    const res = await request(app).get("/api/strips?stash=all").expect(401);
+    expect(res.body.error.message).toMatch(/sign in/i);
+    const bad = await request(app).get("/api/strips?stash=most").expect(400);
+    expect(Object.keys(bad.body.error.fields)).toContain("stash");
+  });
+});
+
 describe("bad input", () => {
   const bad = async (query: string, field: string) => {
     const res = await request(app).get(`/api/strips?${query}`).expect(400);
@@ -384,21 +407,15 @@ describe("look-alikes", () => {
     const all = ((await request(app).get(`/api/inks/${ink.id}/look-alikes`).expect(200)).body as LookAlikeList).items;
     expect(all.length).toBeGreaterThan(0);
     const owned = all[all.length - 1]!.ink.id;
-    const member = express();
-    member.use((_req, res, next) => {
-      res.locals.user = { id: "a-member" } as typeof res.locals.user;
-      next();
-    });
-    member.use("/api", lookAlikesRouter(t.db, { stashOf: async (userId) => new Set(userId === "a-member" ? [owned] : []) }));
-    const res = await request(member).get(`/api/inks/${ink.id}/look-alikes`).expect(200);
+    const member = await signedIn(t, DEMO.member);
+    await member.put("/api/stash").send({ items: [{ inkId: owned }] }).expect(200);
+    const res = await member.get(`/api/inks/${ink.id}/look-alikes`).expect(200);
     const body = res.body as LookAlikeList;
     expect(body.items.map((i) => [i.ink.id, i.owned])).toEqual(all.map((i) => [i.ink.id, i.ink.id === owned]));
     expect(body.ownedLookAlike?.ink.id).toBe(owned);
     expect(res.headers["cache-control"]).toMatch(/private/);
     // A visitor never gets a stash answer.
-    const visitor = express();
-    visitor.use("/api", lookAlikesRouter(t.db, { stashOf: async () => new Set([owned]) }));
-    const anon = (await request(visitor).get(`/api/inks/${ink.id}/look-alikes`).expect(200)).body as LookAlikeList;
+    const anon = (await request(app).get(`/api/inks/${ink.id}/look-alikes`).expect(200)).body as LookAlikeList;
     expect(anon.ownedLookAlike).toBeUndefined();
     expect(anon.items.every((i) => i.owned === undefined)).toBe(true);
   });

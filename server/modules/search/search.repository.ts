@@ -19,6 +19,8 @@ export type StripFilter = {
   inkCount?: number;
   paper?: (typeof papers)[number];
   authorId?: string;
+  /** Strips blendable from this member's stash ("all"), or missing exactly one ink of it. */
+  stash?: { userId: string; mode: "all" | "missingOne" };
 };
 
 export type KeysetSort = "newest" | "saves";
@@ -39,6 +41,11 @@ function inkConditions(f: StripFilter, id: RawBuilder<unknown>, requiredDone = f
   }
   if (f.inkType) {
     c.push(sql`exists (select 1 from strip_inks ft join inks it on it.id = ft.ink_id where ft.strip_id = ${id} and it.type = ${f.inkType})`);
+  }
+  if (f.stash) {
+    const notOwned = sql`select count(*) from strip_inks fs where fs.strip_id = ${id}
+      and fs.ink_id not in (select ink_id from stash_items where user_id = ${f.stash.userId})`;
+    c.push(sql`(${notOwned}) = ${f.stash.mode === "all" ? 0 : 1}`);
   }
   return c;
 }

@@ -36,7 +36,8 @@ export type ColourHit = {
 const round2 = (n: number) => Math.round(n * 100) / 100;
 
 /** Turns ids and slugs into a filter, refusing (422) any that the catalogue does not know. */
-async function resolveFilter(db: SearchDb, q: StripSearchQuery): Promise<repo.StripFilter> {
+async function resolveFilter(db: SearchDb, q: StripSearchQuery, viewerId: string | null): Promise<repo.StripFilter> {
+  if (q.stash && !viewerId) throw new AppError("sign_in_required", "Sign in to search by the inks in your stash.", 401);
   const asked = [...(q.ink ?? []), ...(q.notInk ?? [])];
   const known = new Set((await repo.findKnownInks(db, asked)).map((r) => r.id));
   const brands = await repo.findBrandsBySlug(db, q.brand ?? []);
@@ -59,6 +60,7 @@ async function resolveFilter(db: SearchDb, q: StripSearchQuery): Promise<repo.St
     inkCount: q.inkCount,
     paper: q.paper,
     authorId: q.author,
+    ...(q.stash && viewerId && { stash: { userId: viewerId, mode: q.stash } }),
   };
 }
 
@@ -294,10 +296,10 @@ async function inkSearch(db: SearchDb, q: StripSearchQuery, filter: repo.StripFi
  * Searches published strips — nothing else ever — by inks, brands, ink type, ink count, paper,
  * author and colours. Rows come back in page order, ready for the strips module's hydrate().
  */
-export async function searchStrips(db: DbOrTx, q: StripSearchQuery): Promise<SearchResult> {
+export async function searchStrips(db: DbOrTx, q: StripSearchQuery, viewerId: string | null = null): Promise<SearchResult> {
   const sdb = searchDb(db);
   const cursor = q.cursor ? decodeSearchCursor(q.cursor, q.sort) : undefined;
-  const filter = await resolveFilter(sdb, q);
+  const filter = await resolveFilter(sdb, q, viewerId);
   if (q.color?.length) return colourSearch(db, q, filter, cursor);
   return inkSearch(sdb, q, filter, cursor);
 }
@@ -311,13 +313,20 @@ export async function searchStripList(
   db: DbOrTx,
   q: StripSearchQuery,
   hydrate: (db: DbOrTx, rows: StripRow[]) => Promise<Strip[]>,
+  viewerId: string | null = null,
 ): Promise<StripSearchList> {
-  const result = await searchStrips(db, q);
+  const result = await searchStrips(db, q, viewerId);
   const strips = await hydrate(db, result.rows);
+  let owned: Set<number> | null = null;
+  if (q.stash === "missingOne" && viewerId) {
+    const rows = await db.selectFrom("stash_items").select("ink_id").where("user_id", "=", viewerId).execute();
+    owned = new Set(rows.map((r) => r.ink_id));
+  }
   return {
     items: strips.map((s) => {
       const match = result.matches.get(s.id);
-      return match ? { ...s, match } : s;
+      const missing = owned ? s.inks.find((ink) => !owned.has(ink.id)) : undefined;
+      return { ...s, ...(match && { match }), ...(missing && { missingInkId: missing.id }) };
     }),
     nextCursor: result.nextCursor,
     ...(result.total !== undefined && { total: result.total }),

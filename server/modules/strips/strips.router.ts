@@ -14,7 +14,7 @@ export function stripsRouter(strips: StripsService, limitScale = 1): Router {
   const router = Router();
 
   router.get("/strips", validate({ query: stripSearchQuery }), async (req, res) => {
-    res.json(await strips.search(req.query as never));
+    res.json(await strips.search(req.query as never, res.locals.user ?? null));
   });
 
   const postLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 10, trusted: 60, message: "You have posted many strips in the last hour. Please wait a while.", scale: limitScale });

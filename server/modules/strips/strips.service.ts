@@ -204,8 +204,8 @@ export function createStripsService(deps: { db: Db; store: FileStore }) {
     },
 
     /** The gallery and every search: published strips only, by inks, colours, brand, type, paper… */
-    search(q: StripSearchQuery) {
-      return searchStripList(db, q, hydrate);
+    search(q: StripSearchQuery, viewer: Me | null = null) {
+      return searchStripList(db, q, hydrate, viewer?.id ?? null);
     },
 
     async related(id: number, viewer: Me | null, limit = 6): Promise<Strip[]> {

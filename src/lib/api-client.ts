@@ -32,7 +32,8 @@ export type RequestOptions = {
   method?: "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
   /** Plain objects are sent as JSON; FormData and URLSearchParams as they are. */
   body?: unknown;
-  query?: Record<string, QueryValue>;
+  /** An array value repeats the parameter (`?ink=1&ink=2`). */
+  query?: Record<string, QueryValue | readonly QueryValue[]>;
   headers?: Record<string, string>;
   signal?: AbortSignal;
 };
@@ -78,12 +79,14 @@ function isErrorBody(value: unknown): value is ApiErrorBody {
   );
 }
 
-function buildUrl(path: string, query?: Record<string, QueryValue>): string {
+function buildUrl(path: string, query?: RequestOptions["query"]): string {
   if (!query) return path;
   const params = new URLSearchParams();
   for (const [key, value] of Object.entries(query)) {
-    if (value === undefined || value === null || value === "") continue;
-    params.set(key, String(value));
+    for (const one of Array.isArray(value) ? value : [value]) {
+      if (one === undefined || one === null || one === "") continue;
+      params.append(key, String(one));
+    }
   }
   const qs = params.toString();
   return qs ? `${path}?${qs}` : path;

@@ -14,6 +14,7 @@ import { useUpdateInk } from "../../features/inks/api/update-ink";
 import { colourWords } from "../../features/inks/colour-words";
 import { InkColourFacts } from "../../features/inks/components/ink-colour-facts";
 import { InkForm } from "../../features/inks/components/ink-form";
+import { LookAlikes } from "../../features/inks/components/look-alikes";
 import { InkSwatch } from "../../features/inks/components/ink-swatch";
 import { DiscontinuedBadge, InkTypeBadge } from "../../features/inks/components/ink-type-badge";
 import { StripFeed } from "../../features/strips/components/strip-feed";
@@ -64,7 +65,10 @@ export default function InkPage() {
 
 function InkDetail({ id }: { id: number }) {
   const ink = useInk(id);
-  const { data: me } = useMe();
+  const meQuery = useMe();
+  const me = meQuery.data;
+  // Look-alikes wait until we know who is asking (a member's answer marks their own inks).
+  const viewer = meQuery.isPending ? undefined : (me ?? null);
   const [editing, setEditing] = useState(false);
 
   if (ink.isPending) return <Loading label="Loading the ink…" />;
@@ -142,10 +146,22 @@ function InkDetail({ id }: { id: number }) {
         </section>
       )}
 
-      <section aria-labelledby="ink-strips" className="space-y-4">
-        <h2 id="ink-strips" className="border-b border-rule pb-2 text-2xl font-bold">
-          Strips with this ink
+      <section aria-labelledby="ink-look-alikes" className="space-y-4">
+        <h2 id="ink-look-alikes" className="border-b border-rule pb-2 text-2xl font-bold">
+          Look-alikes
         </h2>
+        <LookAlikes ink={data} viewer={viewer} />
+      </section>
+
+      <section aria-labelledby="ink-strips" className="space-y-4">
+        <div className="flex flex-wrap items-end justify-between gap-x-4 gap-y-1 border-b border-rule pb-2">
+          <h2 id="ink-strips" className="text-2xl font-bold">
+            Strips with this ink
+          </h2>
+          <Link to={`/search?ink=${data.id}`} className="inline-flex min-h-11 items-center font-bold text-accent underline hover:text-accent-deep">
+            Search strips with this ink
+          </Link>
+        </div>
         <StripFeed
           filters={{ sort: "newest", ink: data.id, limit: GALLERY_PAGE_SIZE }}
           label={`Strips with ${data.name}`}

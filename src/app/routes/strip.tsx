@@ -16,10 +16,11 @@ import { useRelatedStrips } from "../../features/strips/api/get-related-strips";
 import { useStrip } from "../../features/strips/api/get-strip";
 import { stripKeys } from "../../features/strips/api/keys";
 import { BandBar } from "../../features/strips/components/band-bar";
+import { BandColourLinks } from "../../features/strips/components/band-colour-links";
 import { BandComparison } from "../../features/strips/components/band-comparison";
 import { DeleteStripButton } from "../../features/strips/components/delete-strip-button";
 import { EditStripForm } from "../../features/strips/components/edit-strip-form";
-import { PhotoFrame } from "../../features/strips/components/photo-frame";
+import { PhotoColourPicker } from "../../features/strips/components/photo-colour-picker";
 import { StripFacts } from "../../features/strips/components/strip-facts";
 import { StripInkOrder } from "../../features/strips/components/strip-ink-order";
 import { StripList } from "../../features/strips/components/strip-list";
@@ -86,17 +87,20 @@ function StripView({ strip, isAuthor, signedIn, onEdit }: { strip: Strip; isAuth
   return (
     <>
       <figure className="flex flex-col gap-3 rounded-xl border border-rule bg-card p-2.5 shadow-card sm:p-4">
-        <PhotoFrame
-          src={strip.images.display}
-          srcSet={srcSet}
-          sizes="(min-width: 66rem) 62rem, calc(100vw - 2rem)"
-          alt={stripAltFor(strip)}
-          placeholder={strip.images.placeholder}
-          width={strip.images.width || undefined}
-          height={strip.images.height || undefined}
-          footer={strip.orientation === "horizontal" && <BandBar bands={strip.bands} orientation={strip.orientation} />}
-        />
-        {strip.orientation === "vertical" && <BandBar bands={strip.bands} orientation={strip.orientation} />}
+        <PhotoColourPicker
+          photo={{
+            src: strip.images.display,
+            srcSet,
+            sizes: "(min-width: 66rem) 62rem, calc(100vw - 2rem)",
+            alt: stripAltFor(strip),
+            placeholder: strip.images.placeholder,
+            width: strip.images.width || undefined,
+            height: strip.images.height || undefined,
+            footer: strip.orientation === "horizontal" && <BandBar bands={strip.bands} orientation={strip.orientation} />,
+          }}
+        >
+          {strip.orientation === "vertical" && <BandBar bands={strip.bands} orientation={strip.orientation} />}
+        </PhotoColourPicker>
       </figure>
 
       {isAuthor && (
@@ -157,6 +161,12 @@ function StripView({ strip, isAuthor, signedIn, onEdit }: { strip: Strip; isAuth
           photo beside its ink's reference colour. ΔE2000 says how far apart they are; up to 2 is barely different.
         </p>
         <BandComparison strip={strip} />
+        {strip.bands.length > 0 && (
+          <>
+            <h3 className="mt-2 text-lg font-bold">Find strips with a band's colour</h3>
+            <BandColourLinks bands={strip.bands} />
+          </>
+        )}
       </section>
 
       <section aria-labelledby="notes-title" className="flex flex-col gap-3">

@@ -16,10 +16,12 @@ type StripRowProps = {
   headingLevel?: 2 | 3;
   /** Controls from other features (e.g. saving to a binder), placed under the row's facts. */
   actions?: ReactNode;
+  /** Lines above the ink chips, from the page (e.g. the band that matched a colour search). */
+  details?: ReactNode;
 };
 
 /** One strip as a full-width band: the photo, then its ink chips, author, date and saves. */
-export function StripRow({ strip, showStatus = false, hideAuthor = false, eager = false, headingLevel = 3, actions }: StripRowProps) {
+export function StripRow({ strip, showStatus = false, hideAuthor = false, eager = false, headingLevel = 3, actions, details }: StripRowProps) {
   const Heading = headingLevel === 2 ? "h2" : "h3";
   const date = strip.publishedAt ?? strip.createdAt;
   return (
@@ -63,6 +65,7 @@ export function StripRow({ strip, showStatus = false, hideAuthor = false, eager 
             {strip.statusReason && <span className="text-ink-soft">Reason: {strip.statusReason}</span>}
           </div>
         )}
+        {details}
         <StripInkChips inks={strip.inks} label={`Inks of ${strip.title}, in order`} />
       </div>
     </article>

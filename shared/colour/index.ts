@@ -189,6 +189,9 @@ export function hueName(lab: Lab): string {
   if (h < 105) return l < 60 ? "olive" : "yellow";
   if (h < 165) return "green";
   if (h < 225) return "teal";
-  if (h < 310) return "blue";
+  if (h < 296) return "blue";
+  // CIELAB bends here: sRGB blue itself sits at h ≈ 306° (very strong for its lightness), while
+  // softer colours at the same angle (lavenders, slate violets) read as purple.
+  if (h < 310) return c > 1.6 * l ? "blue" : "purple";
   return "purple";
 }

@@ -193,6 +193,12 @@ describe("hex and CIELAB", () => {
       ["#87ceeb", "blue"], // skyblue
       ["#800080", "purple"],
       ["#4b0082", "purple"], // indigo
+      ["#9370db", "purple"], // mediumpurple (h ≈ 306°, the angle of sRGB blue itself)
+      ["#663399", "purple"], // rebeccapurple
+      ["#6a5acd", "purple"], // slateblue (a violet despite its name)
+      ["#4169e1", "blue"], // royalblue
+      ["#6495ed", "blue"], // cornflowerblue
+      ["#191970", "blue"], // midnightblue
       ["#ffc0cb", "pink"],
       ["#ff69b4", "pink"], // hotpink
       ["#8b4513", "brown"], // saddlebrown

@@ -108,7 +108,12 @@ async function seedSavesAndStashes(db: Db, services: Services, rand: () => numbe
     });
     const picks = published.filter((s) => s.author_id !== me.id && rand() < 0.35).slice(0, 8);
     for (const s of picks) await services.binders.addItem(binder.id, me, { stripId: s.id, note: "" });
-    const stash = inkIds.filter(() => rand() < 0.12).map((inkId) => ({ inkId, runningLow: rand() < 0.15 }));
+    // A member owns the inks of the strips they blended, and a scattering of others.
+    const ownStrips = published.filter((s) => s.author_id === me.id).map((s) => s.id);
+    const used = ownStrips.length
+      ? new Set((await db.selectFrom("strip_inks").select("ink_id").where("strip_id", "in", ownStrips).execute()).map((r) => r.ink_id))
+      : new Set<number>();
+    const stash = inkIds.filter((id) => used.has(id) || rand() < 0.12).map((inkId) => ({ inkId, runningLow: rand() < 0.15 }));
     await services.stash.replace(me, { items: stash });
   }
 }

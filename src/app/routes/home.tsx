@@ -1,8 +1,19 @@
+import { ColourSwatch } from "../../components/ui/colour-swatch";
 import { Link } from "react-router";
 import { ButtonLink } from "../../components/ui/button";
 import { DocumentTitle } from "../../components/ui/page-header";
 import { useMe } from "../../features/accounts/api/get-me";
 import { StripFeed } from "../../features/strips/components/strip-feed";
+
+/** Starting points for a colour search: our own picks and names, not the colours of any ink. */
+const startingColours = [
+  ["#2f7f86", "Teal"],
+  ["#b5532e", "Rust"],
+  ["#d9b23a", "Mustard"],
+  ["#6f4a83", "Plum"],
+  ["#2e4f8f", "Deep blue"],
+  ["#d97a93", "Rose"],
+] as const;
 
 export default function HomePage() {
   const { data: me, isPending } = useMe();
@@ -21,6 +32,9 @@ export default function HomePage() {
           </p>
           <div className="flex flex-wrap gap-3">
             {me ? <ButtonLink to="/post">Post a strip</ButtonLink> : <ButtonLink to="/gallery">See the gallery</ButtonLink>}
+            <ButtonLink to="/search" variant="secondary">
+              Find combinations
+            </ButtonLink>
             <ButtonLink to="/inks" variant="secondary">
               Browse the ink catalogue
             </ButtonLink>
@@ -40,6 +54,31 @@ export default function HomePage() {
             ))}
           </div>
         </figure>
+      </section>
+
+      <section aria-labelledby="find-title" className="space-y-3">
+        <h2 id="find-title" className="text-2xl font-bold">
+          Start from a colour
+        </h2>
+        <p className="text-ink-soft">Strips with a band close to one of these, or pick your own colour on the search page.</p>
+        <ul className="flex flex-wrap gap-2">
+          {startingColours.map(([hex, words]) => (
+            <li key={hex}>
+              <Link
+                to={`/search?color=${encodeURIComponent(hex)}`}
+                className="inline-flex min-h-11 items-center gap-2 rounded-full border border-rule-strong bg-card py-1 pr-4 pl-1 font-bold hover:border-ink-muted"
+              >
+                <ColourSwatch hex={hex} className="h-8 w-8 rounded-full" />
+                {words}
+              </Link>
+            </li>
+          ))}
+          <li>
+            <Link to={me ? "/search?stash=all" : "/search"} className="inline-flex min-h-11 items-center px-3 font-bold text-accent hover:underline">
+              {me ? "Strips I can blend with my stash" : "More ways to search"} <span aria-hidden="true">&nbsp;→</span>
+            </Link>
+          </li>
+        </ul>
       </section>
 
       <section aria-labelledby="newest-title" className="space-y-4">

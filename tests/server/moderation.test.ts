@@ -68,6 +68,17 @@ describe("the review queue", () => {
     expect(item.suggestions).toHaveLength(3);
     expect(item.farBands).toEqual([]);
   });
+
+  it("counts what waits for the header's badge, the same strips the queue lists", async () => {
+    await request(t.app).get("/api/review-queue/count").expect(401);
+    await mara.get("/api/review-queue/count").expect(403);
+    const before = (await ivo.get("/api/review-queue/count").expect(200)).body.count as number;
+    const { items } = (await ivo.get("/api/review-queue").expect(200)).body as { items: ReviewQueueItem[] };
+    expect(before).toBe(items.length);
+    const pending = items.find((i) => i.strip.status === "pending")!;
+    await decide(ivo, pending.strip.id, { action: "reject", reason: "not a blended strip", expectedVersion: pending.strip.version }).expect(200);
+    expect((await admin.get("/api/review-queue/count").expect(200)).body.count).toBe(before - 1);
+  });
 });
 
 describe("deciding", () => {

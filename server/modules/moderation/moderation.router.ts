@@ -26,6 +26,10 @@ export function moderationRouter(moderation: ModerationService, limitScale = 1):
     res.set("Cache-Control", "no-store").json({ items: await moderation.queue() });
   });
 
+  router.get("/review-queue/count", requireRole("moderator"), async (_req, res) => {
+    res.set("Cache-Control", "no-store").json({ count: await moderation.queueCount() });
+  });
+
   router.post("/strips/:id/decisions", requireRole("moderator"), validate({ params: stripIdParams, body: decisionInput }), async (req, res) => {
     res.json(await moderation.decide(res.locals.user!, Number(req.params.id), req.body));
   });

@@ -16,7 +16,8 @@ import {
 } from "../../../shared/schemas/moderation";
 import type { Analysis } from "../../../shared/schemas/uploads";
 import { nowIso, type Db, type DbOrTx } from "../../db/client";
-import type { StripRow } from "../../db/schema";
+import type { Database, StripRow } from "../../db/schema";
+import type { ExpressionBuilder } from "kysely";
 import { AppError, notFound } from "../../middleware/errors";
 import * as stripsRepo from "../strips/strips.repository";
 import { hydrate, isSuspended, tagBands } from "../strips/strips.service";
@@ -97,6 +98,17 @@ async function maybeTrust(db: DbOrTx, authorId: string, appUrl: string) {
     await notify(db, { userId: authorId }, { kind: "standing", stripId: null, title: "You are now a trusted member", body: "Your strips are now published without waiting for review. Thank you for posting with care." }, appUrl);
   }
 }
+
+/** In the review queue: pending, held after reports, or published with open reports. */
+const inQueue = (eb: ExpressionBuilder<Database, "strips">) =>
+  eb.or([
+    eb("status", "=", "pending"),
+    eb.and([eb("status", "=", "hidden"), eb("hold", "=", "reports")]),
+    eb.and([
+      eb("status", "=", "published"),
+      eb.exists(eb.selectFrom("reports").select("reports.id").whereRef("reports.strip_id", "=", "strips.id").where("reports.status", "=", "open")),
+    ]),
+  ]);
 
 export function createModerationService(deps: { db: Db; appUrl: string }) {
   const { db, appUrl } = deps;
@@ -210,20 +222,17 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
       });
     },
 
+    /** How many strips wait for a decision (the header's badge), without loading them. */
+    async queueCount(): Promise<number> {
+      const row = await db.selectFrom("strips").select((eb) => eb.fn.countAll<number>().as("n")).where(inQueue).executeTakeFirstOrThrow();
+      return Number(row.n);
+    },
+
     async queue(): Promise<ReviewQueueItem[]> {
       const rows = await db
         .selectFrom("strips")
         .selectAll()
-        .where((eb) =>
-          eb.or([
-            eb("status", "=", "pending"),
-            eb.and([eb("status", "=", "hidden"), eb("hold", "=", "reports")]),
-            eb.and([
-              eb("status", "=", "published"),
-              eb.exists(eb.selectFrom("reports").select("reports.id").whereRef("reports.strip_id", "=", "strips.id").where("reports.status", "=", "open")),
-            ]),
-          ]),
-        )
+        .where(inQueue)
         .orderBy("updated_at")
         .limit(200)
         .execute();

@@ -24,15 +24,19 @@ export function useReviewQueue() {
 }
 
 /**
- * How many strips wait for a decision, for the header's badge. Pass `enabled` only for
- * moderators and admins (anyone else gets 403). Undefined while unknown.
+ * How many strips wait for a decision, for the header's badge (GET /api/review-queue/count, so
+ * the badge never loads the queue itself). Pass `enabled` only for moderators and admins
+ * (anyone else gets 403). Undefined while unknown.
  */
 export function useReviewQueueCount(enabled: boolean): number | undefined {
   const { data } = useQuery({
-    ...reviewQueueQueryOptions(),
+    queryKey: reviewKeys.queueCount(),
+    queryFn: ({ signal }) => api.get<{ count: number }>("/api/review-queue/count", { signal }),
     enabled,
+    staleTime: 15_000,
+    refetchOnWindowFocus: true,
     refetchInterval: 120_000,
-    select: (queue) => queue.items.length,
+    select: (answer) => answer.count,
     meta: { errorsShownInline: true },
   });
   return enabled ? data : undefined;

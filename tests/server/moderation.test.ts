@@ -4,7 +4,7 @@ import { createMailer } from "../../server/mail/mailer";
 import { createOutbox, enqueueMail } from "../../server/mail/outbox";
 import pino from "pino";
 import type { Ink } from "../../shared/schemas/inks";
-import type { ReviewQueueItem } from "../../shared/schemas/moderation";
+import type { ModerationLogEntry, ReviewQueueItem } from "../../shared/schemas/moderation";
 import { createTestApp, DEMO, signedIn, type TestApp } from "../setup/test-app";
 import { variedStripPhoto } from "../setup/strip-photo";
 
@@ -165,6 +165,10 @@ describe("deciding", () => {
     expect(after.inks.map((i: { name: string }) => i.name)).toEqual(["Garnet Vein", "Deep Sounding"]);
     const mail = await mailTo(DEMO.member, /Ink tags corrected on "Wrong inks"/);
     expect(mail.text).toContain("Garnet Vein, Deep Sounding");
+    // The log names the ink order before and after.
+    const log = (await ivo.get("/api/moderation/log").query({ strip: String(strip.id) }).expect(200)).body.items as ModerationLogEntry[];
+    const entry = log.find((e) => e.action === "correct inks")!;
+    expect([entry.before, entry.after]).toEqual(["Deep Sounding, Gorse Bloom, Garnet Vein", "Garnet Vein, Deep Sounding"]);
     await mara.put(`/api/strips/${strip.id}/inks`).send({ inks: [ink("Garnet Vein").id], expectedVersion: 2 }).expect(403);
   });
 });

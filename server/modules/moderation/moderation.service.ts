@@ -187,7 +187,10 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
         }
         await stripsRepo.updateStrip(tx, stripId, { ink_count: input.inks.length, version: row.version + 1, updated_at: nowIso() });
         const names = input.inks.map((id) => inks.find((i) => i.id === id)!.name).join(", ");
-        await audit(tx, { moderatorId: mod.id, action: "correct inks", stripId, memberId: row.author_id, reason: "ink tags corrected", note: input.note, detail: { before, after: input.inks } });
+        const beforeInks = await stripsRepo.findInksByIds(tx, before);
+        const beforeNames = before.map((id) => beforeInks.find((i) => i.id === id)?.name ?? `ink #${id}`).join(", ");
+        // The log shows the ink order before and after in words; the ids stay in detail.
+        await audit(tx, { moderatorId: mod.id, action: "correct inks", stripId, memberId: row.author_id, reason: "ink tags corrected", note: input.note, before: beforeNames, after: names, detail: { before, after: input.inks } });
         await notify(tx, { userId: row.author_id }, { kind: "inks-corrected", stripId, title: `Ink tags corrected on "${row.title}"`, body: `A moderator corrected the inks of your strip "${row.title}". They are now: ${names}.${input.note ? `\n\nNote: ${input.note}` : ""}` }, appUrl);
         return { id: stripId, version: row.version + 1 };
       });

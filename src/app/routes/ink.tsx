@@ -108,12 +108,12 @@ function InkDetail({ id }: { id: number }) {
           <h1 id="ink-title" className="text-3xl leading-tight font-bold sm:text-4xl">
             {data.name}
           </h1>
-          <p className="flex flex-wrap items-center gap-2">
+          <div className="flex flex-wrap items-center gap-2">
             <InkTypeBadge type={data.type} />
             {data.discontinued && <DiscontinuedBadge />}
             <span className="text-ink-soft">{words}</span>
             <InYourStashNote inkId={data.id} />
-          </p>
+          </div>
         </div>
         {canModerate(me?.role) && !editing && (
           <Button variant="secondary" className="self-start sm:self-auto" onClick={() => setEditing(true)}>

@@ -1,6 +1,20 @@
 import { PageHeader } from "../../components/ui/page-header";
 import { RequireRole } from "../../features/accounts/components/require-role";
-import { MyStash } from "../../features/stash/components/my-stash";
+import { InkPicker } from "../../features/inks/components/ink-picker";
+import { MyStash, type StashInkPickerSlot } from "../../features/stash/components/my-stash";
+
+const stashPicker: StashInkPickerSlot = ({ onPick, heldIds, busy }) => (
+  <InkPicker
+    label="Add an ink you own"
+    hint="Type part of an ink's name or its brand; Enter adds the highlighted ink."
+    chosenIds={[...heldIds]}
+    chosenLabel="in your stash"
+    // While an add is on its way, typing goes on but a second pick waits.
+    onPick={(ink) => {
+      if (!busy) onPick(ink);
+    }}
+  />
+);
 
 export default function StashPage() {
   return (
@@ -13,7 +27,7 @@ export default function StashPage() {
             title="The inks you own"
             intro="Keep your stash here so you never buy an ink twice, see which inks are running low, and find strips you can blend with what you have."
           />
-          <MyStash />
+          <MyStash inkPicker={stashPicker} />
         </>
       )}
     </RequireRole>

@@ -161,12 +161,7 @@ function StripView({ strip, isAuthor, signedIn, onEdit }: { strip: Strip; isAuth
           photo beside its ink's reference colour. ΔE2000 says how far apart they are; up to 2 is barely different.
         </p>
         <BandComparison strip={strip} />
-        {strip.bands.length > 0 && (
-          <>
-            <h3 className="mt-2 text-lg font-bold">Find strips with a band's colour</h3>
-            <BandColourLinks bands={strip.bands} />
-          </>
-        )}
+        <BandColourLinks bands={strip.bands} />
       </section>
 
       <section aria-labelledby="notes-title" className="flex flex-col gap-3">

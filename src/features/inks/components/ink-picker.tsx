@@ -24,6 +24,8 @@ type InkPickerProps = {
    */
   stashInkIds?: ReadonlySet<number>;
   disabled?: boolean;
+  /** How a chosen ink is marked in the list. */
+  chosenLabel?: string;
 };
 
 /** Stash inks first, otherwise the server's order (best name match first). */
@@ -43,6 +45,7 @@ export function InkPicker({
   chosenIds = [],
   stashInkIds,
   disabled = false,
+  chosenLabel = "already chosen",
 }: InkPickerProps) {
   const id = useId();
   const input = useRef<HTMLInputElement>(null);
@@ -197,7 +200,7 @@ export function InkPicker({
                 </span>
               </span>
               {inStash && <span className="text-sm font-bold text-accent">in your stash</span>}
-              {already && <span className="text-sm text-ink-muted">already chosen</span>}
+              {already && <span className="text-sm text-ink-muted">{chosenLabel}</span>}
             </li>
           );
         })}

@@ -50,7 +50,7 @@ function LookAlikeRow({ item }: { item: LookAlike }) {
         </div>
       </div>
       <div className="flex flex-wrap items-center gap-x-4 gap-y-2 sm:flex-nowrap">
-        <p className="rounded-md bg-paper-shade px-3 py-1.5 text-center sm:min-w-40">
+        <p className="rounded-md bg-paper-shade px-3 py-1.5 text-center sm:w-44">
           <span className="block font-bold">{item.words}</span>
           <span className="block text-sm text-ink-soft tabular-nums">{deltaEText(item.deltaE)}</span>
         </p>

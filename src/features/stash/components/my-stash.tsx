@@ -1,4 +1,4 @@
-import { useId, useState } from "react";
+import { useId, useState, type ReactNode } from "react";
 import type { Ink } from "../../../../shared/schemas/inks";
 import type { StashItem } from "../../../../shared/schemas/stash";
 import { Button } from "../../../components/ui/button";
@@ -15,7 +15,9 @@ import { StashByBrand } from "./stash-by-brand";
 import { STASH_INKS_TITLE_ID } from "./stash-ink-card";
 import { StashExportLink } from "./stash-export-link";
 import { StashImport } from "./stash-import";
-import { StashInkSearch } from "./stash-ink-search";
+
+/** The catalogue's ink search, filled in by the route (features do not import each other). */
+export type StashInkPickerSlot = (props: { onPick: (ink: Ink) => void; heldIds: ReadonlySet<number>; busy: boolean }) => ReactNode;
 
 function matches(item: StashItem, words: string[]): boolean {
   const text = `${item.ink.name} ${item.ink.brand.name}`.toLowerCase();
@@ -68,7 +70,7 @@ function StashList({ items }: { items: StashItem[] }) {
 }
 
 /** The signed-in member's stash: add inks from the catalogue, mark them, import and export a CSV. */
-export function MyStash() {
+export function MyStash({ inkPicker }: { inkPicker: StashInkPickerSlot }) {
   const stash = useStash();
   const add = useAddStashItem();
 
@@ -98,7 +100,7 @@ export function MyStash() {
   return (
     <div className="flex flex-col gap-10">
       <Card>
-        <StashInkSearch heldIds={heldIds} onPick={(ink) => void addInk(ink)} busy={add.isPending} />
+        {inkPicker({ heldIds, onPick: (ink) => void addInk(ink), busy: add.isPending })}
       </Card>
 
       <section aria-labelledby={STASH_INKS_TITLE_ID} className="flex flex-col gap-4">

@@ -1,3 +1,4 @@
+import { useId } from "react";
 import { Link } from "react-router";
 import type { StripBand } from "../../../../shared/schemas/strips";
 import { ColourSwatch } from "../../../components/ui/colour-swatch";
@@ -10,29 +11,35 @@ import { colourSearchHref } from "../sample-colour";
  * a strip's colours without pointing at the photo.
  */
 export function BandColourLinks({ bands }: { bands: Pick<StripBand, "index" | "hex" | "lab">[] }) {
+  const titleId = useId();
   if (bands.length === 0) return null;
   return (
-    <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3" aria-label="Search by a band's colour">
-      {bands.map((band) => {
-        const words = colourWords(band.lab);
-        return (
-          <li key={band.index} className="flex items-center gap-3 rounded-lg border border-rule bg-card px-3 py-2">
-            <ColourSwatch hex={band.hex} className="h-9 w-9 rounded-full" />
-            <p className="min-w-0 flex-1 leading-snug">
-              <span className="block text-sm text-ink-soft">
-                Band {band.index + 1} · {words} · <span className="tabular-nums">{formatHex(band.hex)}</span>
-              </span>
-              <Link to={colourSearchHref(band.hex)} className="inline-flex min-h-9 items-center font-bold text-accent underline hover:text-accent-deep">
-                Find strips with this colour
-                <span className="sr-only">
-                  {" "}
-                  (band {band.index + 1}, {words})
+    <div className="flex flex-col gap-2">
+      <h3 id={titleId} className="mt-2 text-lg font-bold">
+        Find strips with a band's colour
+      </h3>
+      <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3" aria-labelledby={titleId}>
+        {bands.map((band) => {
+          const words = colourWords(band.lab);
+          return (
+            <li key={band.index} className="flex items-center gap-3 rounded-lg border border-rule bg-card px-3 py-2">
+              <ColourSwatch hex={band.hex} className="h-9 w-9 rounded-full" />
+              <p className="min-w-0 flex-1 leading-snug">
+                <span className="block text-sm text-ink-soft">
+                  Band {band.index + 1} · {words} · <span className="tabular-nums">{formatHex(band.hex)}</span>
                 </span>
-              </Link>
-            </p>
-          </li>
-        );
-      })}
-    </ul>
+                <Link to={colourSearchHref(band.hex)} className="inline-flex min-h-9 items-center font-bold text-accent underline hover:text-accent-deep">
+                  Find strips with this colour
+                  <span className="sr-only">
+                    {" "}
+                    (band {band.index + 1}, {words})
+                  </span>
+                </Link>
+              </p>
+            </li>
+          );
+        })}
+      </ul>
+    </div>
   );
 }

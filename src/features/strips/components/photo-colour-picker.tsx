@@ -157,7 +157,10 @@ export function PhotoColourPicker({ photo, children }: PhotoColourPickerProps) {
       <div className="flex flex-col gap-3">
         <div className="flex flex-wrap items-center gap-x-4 gap-y-2">
           <Button id={toggleId} variant="secondary" onClick={() => setPicking((on) => !on)}>
-            <span aria-hidden="true">⌖</span>
+            <svg aria-hidden="true" viewBox="0 0 20 20" className="h-5 w-5" fill="none" stroke="currentColor" strokeWidth="2">
+              <circle cx="10" cy="10" r="6" />
+              <path d="M10 1v5M10 14v5M1 10h5M14 10h5" strokeLinecap="round" />
+            </svg>
             {picking ? "Done picking" : "Pick a colour from the photo"}
           </Button>
           {picking && (
@@ -173,8 +176,8 @@ export function PhotoColourPicker({ photo, children }: PhotoColourPickerProps) {
         </div>
         {picked && "hex" in picked && (
           <p className="max-w-prose text-sm text-ink-muted">
-            Read from the photo as it was taken (the average of a 7 × 7 pixel square), before the paper-white correction
-            that the measured band colours below have, so it can differ a little from them.
+            The average of a 7 × 7 pixel square of the photo at that point. The band colours below are measured over
+            each whole band, so one point can differ a little from them.
           </p>
         )}
       </div>

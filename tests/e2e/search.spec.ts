@@ -91,3 +91,39 @@ test("a member searches by their stash: strips one ink short say which ink to bu
   await expect(page).toHaveURL(/stash=all/);
   await expect(page.getByTestId("result-summary")).toContainText(/found|No strips/);
 });
+
+test("look-alikes: an ink page lists them in words, and a search can swap an ink for one", async ({ page }) => {
+  // The demo catalogue plants this pair under ΔE2000 1 (invented inks; server/demo).
+  const found = (await (await page.request.get("/api/inks?q=Lighthouse%20Lamp")).json()) as { items: { id: number; name: string }[] };
+  const lamp = found.items.find((i) => i.name === "Lighthouse Lamp")!;
+  await page.goto(`/inks/${lamp.id}`);
+  const list = page.getByRole("list", { name: "Look-alikes of Lighthouse Lamp" });
+  const ledge = list.getByTestId("look-alike").filter({ hasText: "Citrine Ledge" });
+  await expect(ledge).toContainText("indistinguishable");
+  await expect(ledge).toContainText(/ΔE2000 0\.\d\d/);
+  await expect(page.getByText(/common practice/)).toBeVisible();
+
+  await page.getByRole("link", { name: /Search strips with this ink/ }).click();
+  await expect(page).toHaveURL(new RegExp(`/search\\?ink=${lamp.id}$`));
+  await page.getByRole("button", { name: /Search with Citrine Ledge .* instead of Lighthouse Lamp/ }).click();
+  const chosen = page.getByRole("list", { name: "Inks the strip must include" });
+  await expect(chosen.getByRole("link", { name: "Citrine Ledge" })).toBeVisible();
+  await expect(chosen.getByRole("link", { name: "Lighthouse Lamp" })).toHaveCount(0);
+  await expect(page).not.toHaveURL(new RegExp(`ink=${lamp.id}(&|$)`));
+  await expect(page.getByTestId("result-summary")).toContainText(/found/);
+});
+
+test("a colour tapped on a strip photo opens a colour search for it", async ({ page }) => {
+  const newest = (await (await page.request.get("/api/strips?limit=1")).json()) as StripSearchList;
+  await page.goto(`/strips/${newest.items[0]!.id}`);
+  await page.getByRole("button", { name: "Pick a colour from the photo" }).click();
+  const surface = page.getByRole("application", { name: "Photo colour picker" });
+  await surface.click(); // the middle of the photo, where the strip lies
+  const picked = page.getByTestId("picked-colour");
+  await expect(picked).toContainText(/#[0-9A-F]{6}/i);
+  const hex = ((await picked.innerText()).match(/#[0-9A-F]{6}/i)![0]).toLowerCase();
+  await picked.getByRole("link", { name: "Find strips with this colour" }).click();
+  await expect(page).toHaveURL(new RegExp(`/search\\?color=${encodeURIComponent(hex)}$`, "i"));
+  await expect(page.getByRole("list", { name: "Colours in this search" })).toContainText(hex);
+  await expect(page.getByTestId("result-summary")).toContainText(/found/);
+});

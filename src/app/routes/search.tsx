@@ -11,6 +11,7 @@ import { SaveToBinderButton } from "../../features/binders/components/save-to-bi
 import { useBrands } from "../../features/inks/api/get-brands";
 import { useInksById } from "../../features/inks/api/get-inks-by-id";
 import { InkPicker } from "../../features/inks/components/ink-picker";
+import { LookAlikeSwaps } from "../../features/inks/components/look-alike-swaps";
 import { useSearchStrips } from "../../features/search/api/search-strips";
 import { ChosenColours } from "../../features/search/components/chosen-colours";
 import { ChosenInks } from "../../features/search/components/chosen-inks";
@@ -42,7 +43,7 @@ export default function SearchPage() {
   const [params, setParams] = useSearchParams();
   const search = useMemo(() => parseSearch(params), [params]);
   const location = useLocation();
-  const { data: me } = useMe();
+  const { data: me, isPending: meLoading } = useMe();
   const stash = useQuery({ ...stashQueryOptions(), enabled: !!me });
   const stashIds = useMemo(() => new Set((stash.data ?? []).map((i) => i.ink.id)), [stash.data]);
   const brands = useBrands();
@@ -96,7 +97,20 @@ export default function SearchPage() {
               disabled={search.ink.length >= MAX_SEARCH_INKS}
               onPick={(ink) => go({ ...search, ink: [...search.ink, ink.id] })}
             />
-            <ChosenInks ids={search.ink} inks={inks} label="Inks the strip must include" onRemove={(id) => go({ ...search, ink: search.ink.filter((x) => x !== id) })} />
+            <ChosenInks
+              ids={search.ink}
+              inks={inks}
+              label="Inks the strip must include"
+              onRemove={(id) => go({ ...search, ink: search.ink.filter((x) => x !== id) })}
+              extra={(ink) => (
+                <LookAlikeSwaps
+                  ink={ink}
+                  viewer={meLoading ? undefined : (me ?? null)}
+                  exclude={chosenIds}
+                  onSwap={(other) => go({ ...search, ink: search.ink.map((x) => (x === ink.id ? other.id : x)) })}
+                />
+              )}
+            />
             <InkPicker
               label="Leave out"
               hint="No strip with these inks."

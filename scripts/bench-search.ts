@@ -16,6 +16,7 @@ import { openDatabase, type Db } from "../server/db/client";
 import { migrateToLatest } from "../server/db/migrate";
 import { seedDemo } from "../server/demo/seed";
 import { searchStrips } from "../server/modules/search/search.service";
+import { seededRandom } from "../server/demo/seeded-random";
 
 const STRIPS = Number(process.env.BENCH_STRIPS ?? 100_000);
 const BANDS_PER_STRIP = 4;
@@ -24,18 +25,8 @@ const FULL_SCAN_QUERIES = 12;
 const INK_QUERIES = 200;
 const PAGE = 20;
 
-// Deterministic pseudo-random numbers (mulberry32), so runs are comparable.
-function random(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-const rnd = random(20261202);
+// Deterministic pseudo-random numbers, so runs are comparable.
+const rnd = seededRandom(20261202);
 const pick = <T>(list: readonly T[]) => list[Math.floor(rnd() * list.length)]!;
 const hex = (r: number, g: number, b: number) => "#" + ((1 << 24) | (r << 16) | (g << 8) | b).toString(16).slice(1);
 const randomHex = () => hex(Math.floor(rnd() * 256), Math.floor(rnd() * 256), Math.floor(rnd() * 256));

@@ -3,18 +3,9 @@ import sharp from "sharp";
 import { labToLch, deltaE2000, type Lab } from "../../shared/colour/index";
 import { D65_WHITE, SRGB_TO_XYZ, XYZ_TO_SRGB, invert3, labToXyz, mul3, mulVec3, srgbEncode } from "../analysis/srgb-lab";
 import type { CatalogueInk } from "../analysis/types";
+import { seededRandom } from "./seeded-random";
 
-/** mulberry32: a small, well-known 32-bit seeded PRNG (public domain). */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom } from "./seeded-random";
 
 export function gaussian(rand: () => number): () => number {
   let spare: number | null = null;

@@ -15,18 +15,8 @@ import { colourBoxes, hueWeight, inBoxes, maxHueWeight, slOf } from "../../serve
 import { cellOf, cellRuns } from "../../server/modules/search/colour-cells";
 import { findColourHits } from "../../server/modules/search/search.service";
 import { searchDb } from "../../server/modules/search/search-tables";
+import { seededRandom as seeded } from "../../server/demo/seeded-random";
 
-/** mulberry32 (public domain), seeded so failures can be replayed. */
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const fromLch = (l: number, c: number, hDeg: number): Lab => ({ l, a: c * Math.cos((hDeg * Math.PI) / 180), b: c * Math.sin((hDeg * Math.PI) / 180) });
 

@@ -11,18 +11,8 @@ import type { Ink } from "../../shared/schemas/inks";
 import { type LookAlikeList, type StripSearchList, type StripSearchResult } from "../../shared/schemas/search";
 import { papers, type StripStatus } from "../../shared/schemas/strips";
 import { createTestApp, DEMO, signedIn, type TestApp } from "../setup/test-app";
+import { seededRandom as seeded } from "../../server/demo/seeded-random";
 
-/** mulberry32 (public domain), seeded so failures can be replayed. */
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 type Model = {
   id: number;

@@ -3,6 +3,7 @@ import { useCallback, useMemo, type ReactNode } from "react";
 import { Link, useLocation, useSearchParams } from "react-router";
 import { MAX_SEARCH_COLOURS, MAX_SEARCH_INKS, type StripSearchResult } from "../../../shared/schemas/search";
 import { Button } from "../../components/ui/button";
+import { LoadMoreButton } from "../../components/ui/load-more-button";
 import { Loading } from "../../components/ui/loading";
 import { Notice } from "../../components/ui/notice";
 import { PageHeader } from "../../components/ui/page-header";
@@ -229,19 +230,7 @@ export default function SearchPage() {
                   <p>{errorMessage(results.error)}</p>
                 </Notice>
               )}
-              {results.hasNextPage && (
-                <div className="flex justify-center">
-                  <Button
-                    variant="secondary"
-                    busy={results.isFetchingNextPage}
-                    busyLabel="Loading more strips…"
-                    onClick={() => void results.fetchNextPage()}
-                    className="w-full sm:w-auto"
-                  >
-                    Load more strips
-                  </Button>
-                </div>
-              )}
+              {results.hasNextPage && <LoadMoreButton busy={results.isFetchingNextPage} onClick={() => void results.fetchNextPage()} />}
             </div>
           )}
         </section>

@@ -17,18 +17,8 @@ import {
   type SearchState,
 } from "../../../src/features/search/search-state";
 import { thresholdWords } from "../../../src/features/search/threshold-words";
+import { seededRandom as seeded } from "../../../server/demo/seeded-random";
 
-/** mulberry32 (public domain), seeded so a failure can be replayed. */
-function seeded(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function randomSearch(rand: () => number): SearchState {
   const n = (max: number) => Math.floor(rand() * (max + 1));

@@ -1,6 +1,7 @@
 import type { Strip } from "../../../../shared/schemas/strips";
 import type { ReactNode } from "react";
 import { Button } from "../../../components/ui/button";
+import { LoadMoreButton } from "../../../components/ui/load-more-button";
 import { Loading } from "../../../components/ui/loading";
 import { Notice } from "../../../components/ui/notice";
 import { errorMessage } from "../../../lib/api-client";
@@ -46,19 +47,7 @@ export function StripFeed({ filters, label, empty, loadMore = true, eagerCount =
           <p>{errorMessage(strips.error)}</p>
         </Notice>
       )}
-      {loadMore && strips.hasNextPage && (
-        <div className="flex justify-center">
-          <Button
-            variant="secondary"
-            busy={strips.isFetchingNextPage}
-            busyLabel="Loading more strips…"
-            onClick={() => void strips.fetchNextPage()}
-            className="w-full sm:w-auto"
-          >
-            Load more strips
-          </Button>
-        </div>
-      )}
+      {loadMore && strips.hasNextPage && <LoadMoreButton busy={strips.isFetchingNextPage} onClick={() => void strips.fetchNextPage()} />}
       {loadMore && !strips.hasNextPage && items.length > filters.limit && (
         <p className="text-center text-ink-muted">That is every strip here.</p>
       )}

@@ -186,10 +186,11 @@ export function hueName(lab: Lab): string {
   }
   if (h < 45) return l >= 72 && c < 45 ? "pink" : "red";
   if (h < 75) return "orange";
-  if (h < 105) return l < 60 ? "olive" : "yellow";
+  // Yellow's tints drift a few degrees greener than the sRGB yellow corner (h ≈ 103°).
+  if (h < 110) return l < 60 ? "olive" : "yellow";
   if (h < 165) return "green";
   if (h < 225) return "teal";
-  if (h < 296) return "blue";
+  if (h < 300) return "blue";
   // CIELAB bends here: sRGB blue itself sits at h ≈ 306° (very strong for its lightness), while
   // softer colours at the same angle (lavenders, slate violets) read as purple.
   if (h < 310) return c > 1.6 * l ? "blue" : "purple";

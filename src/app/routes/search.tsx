@@ -145,7 +145,7 @@ export default function SearchPage() {
             </p>
           </FilterSection>
 
-          <FilterSection title="Your inks">
+          <FilterSection title="By your stash">
             <StashChoice value={search.stash} signedIn={!!me} signInHref={signInHref} onChange={(stashMode) => go({ ...search, stash: stashMode })} />
             {me && stash.data && stash.data.length === 0 && (
               <p className="text-sm text-ink-soft">

@@ -20,7 +20,6 @@ export function StashChoice({ value, onChange, signedIn, signInHref }: StashChoi
   if (!signedIn) {
     return (
       <div className="flex flex-col gap-1">
-        <p className="font-bold">By your stash</p>
         <p className="text-sm text-ink-soft">
           <Link to={signInHref} className="font-bold text-accent hover:underline">
             Sign in
@@ -32,7 +31,7 @@ export function StashChoice({ value, onChange, signedIn, signInHref }: StashChoi
   }
   return (
     <fieldset className="flex flex-col gap-1">
-      <legend className="mb-1 font-bold">By your stash</legend>
+      <legend className="sr-only">By your stash</legend>
       {choices.map((c) => (
         <label key={c.label} className="flex min-h-11 cursor-pointer items-start gap-3 rounded-md px-1 py-1.5 hover:bg-paper-shade">
           <input

@@ -103,6 +103,8 @@ export type StripSearchResult = Strip & {
   match?: ColourMatch[];
   /** With stash=missingOne: the one ink of this strip that the member does not own. */
   missingInkId?: number;
+  /** …and the member's own ink closest to it, when one is within ΔE2000 5 (a look-alike). */
+  ownedLookAlike?: { inkId: number; name: string; brand: string; hex: string; deltaE: number; words: string };
 };
 
 export type StripSearchList = {

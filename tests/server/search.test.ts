@@ -289,6 +289,24 @@ describe("finding combinations by my stash", () => {
     const missing = await allPages({ stash: "missingOne", sort: "saves" }, 6, member);
     expect(missing.ids).toEqual(oneShort.map((s) => s.id));
     expect(missing.items.map((s) => s.missingInkId)).toEqual(oneShort.map((s) => notOwned(s)[0]!.id));
+    // For the ink to buy, the closest ink the member owns within ΔE2000 5, if any (culori's
+    // CIEDE2000 as the outside reference).
+    const ref = differenceCiede2000();
+    let withLookAlike = 0;
+    for (const item of missing.items) {
+      const gone = inks.find((i) => i.id === item.missingInkId)!;
+      const best = inks
+        .filter((i) => owned.has(i.id))
+        .map((i) => ({ id: i.id, de: Math.round(ref({ mode: "lab65", ...gone.lab }, { mode: "lab65", ...i.lab }) * 100) / 100 }))
+        .filter((o) => o.de <= 5)
+        .sort((a, b) => a.de - b.de || a.id - b.id)[0];
+      expect(item.ownedLookAlike?.inkId).toBe(best?.id);
+      if (best) {
+        withLookAlike++;
+        expect(item.ownedLookAlike!.deltaE).toBeCloseTo(best.de, 2);
+      }
+    }
+    expect(withLookAlike).toBeGreaterThan(0);
 
     // The stash combines with the other filters (here an ink and a colour).
     const some = blendable.find((s) => s.inks.length > 1) ?? blendable[0]!;

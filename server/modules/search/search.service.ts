@@ -1,5 +1,5 @@
-import { deltaE2000, hexToLab, type Lab } from "../../../shared/colour";
-import type { ColourMatch, StripSearchList, StripSearchQuery } from "../../../shared/schemas/search";
+import { deltaE2000, describeDeltaE, hexToLab, type Lab } from "../../../shared/colour";
+import { LOOK_ALIKE_DELTA_E, type ColourMatch, type StripSearchList, type StripSearchQuery, type StripSearchResult } from "../../../shared/schemas/search";
 import type { Strip } from "../../../shared/schemas/strips";
 import type { DbOrTx } from "../../db/client";
 import type { StripRow } from "../../db/schema";
@@ -304,6 +304,31 @@ export async function searchStrips(db: DbOrTx, q: StripSearchQuery, viewerId: st
   return inkSearch(sdb, q, filter, cursor);
 }
 
+type OwnedInk = { id: number; name: string; brand: string; hex: string; lab: Lab };
+
+async function ownedInks(db: DbOrTx, userId: string): Promise<OwnedInk[]> {
+  const rows = await db
+    .selectFrom("stash_items as s")
+    .innerJoin("inks as i", "i.id", "s.ink_id")
+    .innerJoin("brands as b", "b.id", "i.brand_id")
+    .select(["i.id", "i.name", "b.name as brand", "i.hex", "i.lab_l", "i.lab_a", "i.lab_b"])
+    .where("s.user_id", "=", userId)
+    .execute();
+  return rows.map((r) => ({ id: r.id, name: r.name, brand: r.brand, hex: r.hex, lab: { l: r.lab_l, a: r.lab_a, b: r.lab_b } }));
+}
+
+/** The member's ink closest to a missing one, if it is a look-alike (within LOOK_ALIKE_DELTA_E). */
+function closestOwned(lab: Lab, owned: OwnedInk[]): StripSearchResult["ownedLookAlike"] | null {
+  let best: { ink: OwnedInk; deltaE: number } | null = null;
+  for (const ink of owned) {
+    const deltaE = round2(deltaE2000(lab, ink.lab));
+    if (deltaE <= LOOK_ALIKE_DELTA_E && (!best || deltaE < best.deltaE || (deltaE === best.deltaE && ink.id < best.ink.id))) best = { ink, deltaE };
+  }
+  if (!best) return null;
+  const { ink, deltaE } = best;
+  return { inkId: ink.id, name: ink.name, brand: ink.brand, hex: ink.hex, deltaE, words: describeDeltaE(deltaE) };
+}
+
 /**
  * The whole GET /api/strips answer: search, then the strips module's hydrate() (passed in, so
  * this module does not import the strips service that calls it), with each colour search result
@@ -317,16 +342,15 @@ export async function searchStripList(
 ): Promise<StripSearchList> {
   const result = await searchStrips(db, q, viewerId);
   const strips = await hydrate(db, result.rows);
-  let owned: Set<number> | null = null;
-  if (q.stash === "missingOne" && viewerId) {
-    const rows = await db.selectFrom("stash_items").select("ink_id").where("user_id", "=", viewerId).execute();
-    owned = new Set(rows.map((r) => r.ink_id));
-  }
+  let owned: OwnedInk[] | null = null;
+  if (q.stash === "missingOne" && viewerId) owned = await ownedInks(db, viewerId);
+  const ownedIds = new Set((owned ?? []).map((i) => i.id));
   return {
     items: strips.map((s) => {
       const match = result.matches.get(s.id);
-      const missing = owned ? s.inks.find((ink) => !owned.has(ink.id)) : undefined;
-      return { ...s, ...(match && { match }), ...(missing && { missingInkId: missing.id }) };
+      const missing = owned ? s.inks.find((ink) => !ownedIds.has(ink.id)) : undefined;
+      const lookAlike = missing && owned ? closestOwned(missing.lab, owned) : null;
+      return { ...s, ...(match && { match }), ...(missing && { missingInkId: missing.id }), ...(lookAlike && { ownedLookAlike: lookAlike }) };
     }),
     nextCursor: result.nextCursor,
     ...(result.total !== undefined && { total: result.total }),

@@ -223,7 +223,7 @@ export default function SearchPage() {
                 label="Search results"
                 eagerCount={2}
                 actions={(strip) => <SaveToBinderButton stripId={strip.id} />}
-                details={(strip) => <StripMatch strip={strip} matches={strip.match} missingInkId={strip.missingInkId} />}
+                details={(strip) => <StripMatch strip={strip} matches={strip.match} missingInkId={strip.missingInkId} ownedLookAlike={strip.ownedLookAlike} />}
               />
               {results.isError && (
                 <Notice tone="error" title="More strips could not be loaded" live>

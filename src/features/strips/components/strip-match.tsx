@@ -1,6 +1,6 @@
 import { Link } from "react-router";
 import { describeDeltaE, hexToLab } from "../../../../shared/colour";
-import type { ColourMatch } from "../../../../shared/schemas/search";
+import type { ColourMatch, StripSearchResult } from "../../../../shared/schemas/search";
 import type { Strip } from "../../../../shared/schemas/strips";
 import { ColourSwatch } from "../../../components/ui/colour-swatch";
 import { colourWords } from "../../../lib/colour-words";
@@ -12,10 +12,12 @@ type StripMatchProps = {
   matches?: ColourMatch[];
   /** For a "one ink short" search: the ink the member does not own. */
   missingInkId?: number;
+  /** …and the member's own ink closest to it, if it is a look-alike. */
+  ownedLookAlike?: StripSearchResult["ownedLookAlike"];
 };
 
 /** Why a strip is in a search's results: the band that matched each colour, the ink still to buy. */
-export function StripMatch({ strip, matches, missingInkId }: StripMatchProps) {
+export function StripMatch({ strip, matches, missingInkId, ownedLookAlike }: StripMatchProps) {
   const missing = missingInkId === undefined ? undefined : strip.inks.find((i) => i.id === missingInkId);
   if (!matches?.length && !missing) return null;
   return (
@@ -50,6 +52,18 @@ export function StripMatch({ strip, matches, missingInkId }: StripMatchProps) {
               {missing.name}
             </Link>{" "}
             ({missing.brand}).
+            {ownedLookAlike && (
+              <>
+                {" "}
+                Your{" "}
+                <Link to={`/inks/${ownedLookAlike.inkId}`} className="relative z-10 font-bold text-accent hover:underline">
+                  {ownedLookAlike.name}
+                </Link>{" "}
+                is {ownedLookAlike.words === "similar" ? "similar to it" : `${ownedLookAlike.words} from it`}{" "}
+                <span className="text-ink-muted tabular-nums">(ΔE2000 {ownedLookAlike.deltaE.toFixed(2)})</span>
+                {ownedLookAlike.deltaE <= 2 ? " and may stand in." : "."}
+              </>
+            )}
           </span>
         </p>
       )}

@@ -69,10 +69,12 @@ export default function SearchPage() {
   const total = results.data?.pages[0]?.total;
 
   let summary = "";
+  let shortCount = "";
   if (results.data) {
     const n = total ?? items.length;
     const more = total === undefined && results.hasNextPage;
     const what = more ? `${items.length}+ strips` : n === 0 ? "No strips" : plural(n, "strip");
+    shortCount = ` (${more ? `${items.length}+` : n})`;
     const order = sort === "closest" ? "closest colour first" : sort === "saves" ? "most saved first" : "newest first";
     summary = count === 0 ? `All ${what}, ${order}. Choose inks or colours to narrow them.` : `${what} found, ${order}.`;
   }
@@ -87,7 +89,7 @@ export default function SearchPage() {
       <div className="grid items-start gap-8 lg:grid-cols-[20rem_minmax(0,1fr)]">
         <aside aria-label="Search filters" className="flex flex-col gap-5 rounded-xl border border-rule bg-card p-4 shadow-card">
           <a href="#search-results" className="self-start font-bold text-accent hover:underline lg:hidden">
-            Skip to the results
+            Skip to the results{shortCount}
           </a>
           <FilterSection title="Inks">
             <InkPicker

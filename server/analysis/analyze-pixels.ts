@@ -16,6 +16,10 @@ export type AnalyzeOptions = {
   white?: WhitePoint;
   /** Overrides for the segmentation constants (for experiments; production uses the defaults). */
   segment?: Partial<SegmentParams>;
+  /** The paper white, when already estimated on this same image (estimatePaper(img, white)). */
+  paper?: PaperEstimate;
+  /** The corrected CIELAB image, when already made from this image and `paper` (toCorrectedLab). */
+  lab?: LabImage;
 };
 
 /** Adjacent bands closer than this (ΔE2000) are one band read twice; ours, "barely different". */
@@ -59,10 +63,9 @@ function measureBand(img: LabImage, g: StripGeometry, profile: Profile, seg: Seg
 }
 
 /** Finds and measures the strip; throws NoStripError when there is none. */
-export function measureStrip(img: RgbImage, opts: { white?: WhitePoint; segment?: Partial<SegmentParams> } = {}): StripMeasurement {
-  checkWhite(opts.white);
-  const paper = findPaperWhite(img, opts.white);
-  const labImg = toCorrectedLab(img, paper);
+export function measureStrip(img: RgbImage, opts: Pick<AnalyzeOptions, "white" | "segment" | "paper" | "lab"> = {}): StripMeasurement {
+  const paper = opts.paper ?? estimatePaper(img, opts.white);
+  const labImg = (opts.paper && opts.lab) || toCorrectedLab(img, paper);
   const geometry = findStrip(labImg);
   const profile = readProfile(labImg, geometry);
   const seg = segmentProfile(profile.lab, profile.n, { ...DEFAULT_SEGMENT_PARAMS, ...opts.segment });
@@ -75,6 +78,19 @@ export function measureStrip(img: RgbImage, opts: { white?: WhitePoint; segment?
     } else k++;
   }
   return { paper, geometry, profile, bands, sigma: seg.sigma };
+}
+
+/** The paper white of the photo; throws RangeError for a white point outside the photo. */
+export function estimatePaper(img: RgbImage, white?: WhitePoint): PaperEstimate {
+  checkWhite(white);
+  return findPaperWhite(img, white);
+}
+
+/** The paper as the result reports it: its photographed colour, 8-bit sRGB → CIELAB (D65). */
+export function reportPaper(paper: PaperEstimate): AnalysisResult["paper"] {
+  const [r, g, b] = paperSrgb8(paper);
+  const lab = srgbToLab(r, g, b);
+  return { found: paper.found, hex: labToHex(lab), lab: { l: round(lab.l, 2), a: round(lab.a, 2), b: round(lab.b, 2) } };
 }
 
 export function analyzePixels(img: RgbImage, opts: AnalyzeOptions): AnalysisResult {
@@ -95,15 +111,9 @@ export function analyzePixels(img: RgbImage, opts: AnalyzeOptions): AnalysisResu
     };
   });
   const transitions = m.bands.slice(1).map((b, k) => ({ start: frac(m.bands[k].to), end: frac(b.from) }));
-  const [r, g, b] = paperSrgb8(m.paper);
-  const paperLab = srgbToLab(r, g, b);
   return {
     orientation: m.geometry.orientation,
-    paper: {
-      found: m.paper.found,
-      hex: labToHex(paperLab),
-      lab: { l: round(paperLab.l, 2), a: round(paperLab.a, 2), b: round(paperLab.b, 2) },
-    },
+    paper: reportPaper(m.paper),
     bands,
     transitions,
     strip: stripOutline(m.geometry, img.width, img.height),

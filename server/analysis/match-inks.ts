@@ -34,6 +34,6 @@ export function suggestInks(lab: Lab, catalogue: readonly CatalogueInk[], stash?
       ordered = [preferred, ...scored.filter((s) => s !== preferred).slice(0, SUGGESTION_COUNT - 1)];
     }
   }
-  const suggestions = ordered.map((s) => ({ inkId: s.ink.id, name: s.ink.name, brand: s.ink.brand, deltaE: round2(s.de) }));
+  const suggestions = ordered.map((s) => ({ inkId: s.ink.id, name: s.ink.name, brand: s.ink.brand, deltaE: round2(s.de), hex: s.ink.hex, lab: s.ink.lab }));
   return { suggestions, confidence: confidenceFor(ordered[0].de) };
 }

@@ -149,13 +149,16 @@ function modalChromaticity(s: Samples, bright: Int32Array): [number, number] {
     const j = Math.min(n - 1, Math.max(0, Math.floor(s.cg[k] / CHROMA_BIN)));
     hist[i * n + j] += 1;
   }
+  // 3×3 neighbourhood counts as two 3-wide sums (counts are whole numbers, so the order of the
+  // additions cannot change them).
+  const rows = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) for (let j = 1; j < n - 1; j++) rows[i * n + j] = hist[i * n + j - 1]! + hist[i * n + j]! + hist[i * n + j + 1]!;
   let best = -1;
   let bi = 0;
   let bj = 0;
   for (let i = 1; i < n - 1; i++) {
     for (let j = 1; j < n - 1; j++) {
-      let v = 0;
-      for (let di = -1; di <= 1; di++) for (let dj = -1; dj <= 1; dj++) v += hist[(i + di) * n + j + dj];
+      const v = rows[(i - 1) * n + j]! + rows[i * n + j]! + rows[(i + 1) * n + j]!;
       if (v > best) {
         best = v;
         bi = i;
@@ -180,37 +183,51 @@ function modalChromaticity(s: Samples, bright: Int32Array): [number, number] {
 /** Weighted least squares of lum on the basis, via normal equations with partial pivoting. */
 function fitCoefficients(s: Samples, idx: Int32Array, order: 1 | 2): number[] | null {
   const k = order === 1 ? 3 : 6;
-  const a = Array.from({ length: k }, () => new Float64Array(k + 1));
-  const row = new Float64Array(6);
-  for (const p of idx) {
-    const x = s.x[p];
-    const y = s.y[p];
-    row[0] = 1;
-    row[1] = x;
-    row[2] = y;
-    row[3] = x * x;
-    row[4] = x * y;
-    row[5] = y * y;
-    const t = s.lum[p];
-    for (let i = 0; i < k; i++) {
-      const ri = row[i];
-      for (let j = i; j < k; j++) a[i][j] += ri * row[j];
-      a[i][k] += ri * t;
-    }
+  // The normal equations' sums for the full quadratic basis (1, x, y, x², xy, y²), in scalars:
+  // the linear fit uses the first three rows and columns of the same sums.
+  let s01 = 0, s02 = 0, s03 = 0, s04 = 0, s05 = 0;
+  let s11 = 0, s12 = 0, s13 = 0, s14 = 0, s15 = 0;
+  let s22 = 0, s23 = 0, s24 = 0, s25 = 0;
+  let s33 = 0, s34 = 0, s35 = 0, s44 = 0, s45 = 0, s55 = 0;
+  let t0 = 0, t1 = 0, t2 = 0, t3 = 0, t4 = 0, t5 = 0;
+  const n = idx.length;
+  const { x: xs, y: ys, lum } = s;
+  for (let q = 0; q < n; q++) {
+    const p = idx[q]!;
+    const x = xs[p]!;
+    const y = ys[p]!;
+    const xx = x * x;
+    const xy = x * y;
+    const yy = y * y;
+    const t = lum[p]!;
+    s01 += x; s02 += y; s03 += xx; s04 += xy; s05 += yy;
+    s11 += x * x; s12 += x * y; s13 += x * xx; s14 += x * xy; s15 += x * yy;
+    s22 += y * y; s23 += y * xx; s24 += y * xy; s25 += y * yy;
+    s33 += xx * xx; s34 += xx * xy; s35 += xx * yy;
+    s44 += xy * xy; s45 += xy * yy; s55 += yy * yy;
+    t0 += t; t1 += x * t; t2 += y * t; t3 += xx * t; t4 += xy * t; t5 += yy * t;
   }
-  for (let i = 0; i < k; i++) for (let j = 0; j < i; j++) a[i][j] = a[j][i];
+  const full = [
+    [n, s01, s02, s03, s04, s05, t0],
+    [s01, s11, s12, s13, s14, s15, t1],
+    [s02, s12, s22, s23, s24, s25, t2],
+    [s03, s13, s23, s33, s34, s35, t3],
+    [s04, s14, s24, s34, s44, s45, t4],
+    [s05, s15, s25, s35, s45, s55, t5],
+  ];
+  const a = full.slice(0, k).map((r) => Float64Array.from([...r.slice(0, k), r[6]!]));
   for (let c = 0; c < k; c++) {
     let p = c;
-    for (let r = c + 1; r < k; r++) if (Math.abs(a[r][c]) > Math.abs(a[p][c])) p = r;
-    if (Math.abs(a[p][c]) < 1e-12) return null;
-    [a[c], a[p]] = [a[p], a[c]];
+    for (let r = c + 1; r < k; r++) if (Math.abs(a[r]![c]!) > Math.abs(a[p]![c]!)) p = r;
+    if (Math.abs(a[p]![c]!) < 1e-12) return null;
+    [a[c], a[p]] = [a[p]!, a[c]!];
     for (let r = 0; r < k; r++) {
       if (r === c) continue;
-      const f = a[r][c] / a[c][c];
-      for (let j = c; j <= k; j++) a[r][j] -= f * a[c][j];
+      const f = a[r]![c]! / a[c]![c]!;
+      for (let j = c; j <= k; j++) a[r]![j]! -= f * a[c]![j]!;
     }
   }
-  return a.map((r, i) => r[k] / r[i]);
+  return a.map((r, i) => r[k]! / r[i]!);
 }
 
 export function evaluateField(field: PaperField, x: number, y: number): number {
@@ -311,7 +328,9 @@ export function findPaperWhite(img: RgbImage, white?: WhitePoint): PaperEstimate
   }
 
   const refLum = pointColour ? Y_ROW[0] * pointColour[0] + Y_ROW[1] * pointColour[1] + Y_ROW[2] * pointColour[2] : peak;
-  const candidates = select(s.n, (i) => s.lum[i] >= BRIGHT_FRACTION * refLum && Math.hypot(s.cr[i] - target[0], s.cg[i] - target[1]) <= CHROMA_TOLERANCE);
+  const minLum = BRIGHT_FRACTION * refLum;
+  const tol2 = CHROMA_TOLERANCE * CHROMA_TOLERANCE;
+  const candidates = select(s.n, (i) => s.lum[i] >= minLum && (s.cr[i] - target[0]) ** 2 + (s.cg[i] - target[1]) ** 2 <= tol2);
 
   if (!white) {
     let borderTotal = 0;

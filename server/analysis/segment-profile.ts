@@ -1,6 +1,6 @@
 // Optimal 1-D segmentation of a colour profile into bands (flat) and transitions (blends) by
 // dynamic programming with a penalty per band. See docs/decisions/002-strip-segmentation.md.
-import { SRGB_TO_XYZ, XYZ_TO_SRGB, labToXyz, mulVec3, xyzToLabInto } from "./srgb-lab";
+import { D65_WHITE, SRGB_TO_XYZ, XYZ_TO_SRGB, labFFast, labToXyz, mulVec3 } from "./srgb-lab";
 
 export type Segment = { from: number; to: number }; // sample indices, [from, to)
 
@@ -144,6 +144,10 @@ function density(l: number, a: number, b: number): [number, number, number] {
  * w samples before i and of the w samples from j on: dye laid over dye multiplies reflectance
  * (Beer–Lambert), so layered blends are straight in density and curved in CIELAB.
  * Returned as table[i * (maxT + 1) + (j − i)] for 1 ≤ j − i ≤ maxT.
+ *
+ * Straight in density means geometric in reflectance: from one sample to the next each channel's
+ * reflectance is multiplied by the same factor, so a blend costs three exponentials, not three
+ * per sample.
  */
 function densityBridgeTable(lab: Float64Array, n: number, w: number, maxT: number): Float64Array {
   const table = new Float64Array((n + 1) * (maxT + 1)).fill(Infinity);
@@ -152,29 +156,40 @@ function densityBridgeTable(lab: Float64Array, n: number, w: number, maxT: numbe
     for (let t = from; t < to; t++) for (let c = 0; c < 3; c++) m[c] += lab[t * 3 + c] / (to - from);
     return m;
   };
-  const dens: [number, number, number][] = [];
+  const dens = new Float64Array(n * 3);
   for (let j = 0; j < n; j++) {
     const m = mean(j, Math.min(n, j + w));
-    dens.push(density(m[0], m[1], m[2]));
+    dens.set(density(m[0], m[1], m[2]), j * 3);
   }
-  const out = [0, 0, 0];
+  // sRGB → XYZ rows, divided by the white's X and Z (CIELAB's X/Xn, Z/Zn).
   const M = SRGB_TO_XYZ;
+  const xr = M[0] / D65_WHITE[0], xg = M[1] / D65_WHITE[0], xb = M[2] / D65_WHITE[0];
+  const yr = M[3], yg = M[4], yb = M[5];
+  const zr = M[6] / D65_WHITE[2], zg = M[7] / D65_WHITE[2], zb = M[8] / D65_WHITE[2];
   for (let i = 1; i < n; i++) {
     const a = mean(Math.max(0, i - w), i);
     const dA = density(a[0], a[1], a[2]);
     for (let m = 1; m <= maxT && i + m < n; m++) {
-      const dB = dens[i + m];
+      const o = (i + m) * 3;
+      // Reflectance at t = i is exp(−((1 − f)·dA + f·dB)) with f = 1/(m + 1); each step multiplies it by q.
+      const qr = Math.exp(-(dens[o]! - dA[0]) / (m + 1));
+      const qg = Math.exp(-(dens[o + 1]! - dA[1]) / (m + 1));
+      const qb = Math.exp(-(dens[o + 2]! - dA[2]) / (m + 1));
+      let r = Math.exp(-dA[0]) * qr;
+      let g = Math.exp(-dA[1]) * qg;
+      let b = Math.exp(-dA[2]) * qb;
       let sse = 0;
       for (let t = i; t < i + m; t++) {
-        const f = (t - i + 1) / (m + 1);
-        const r = Math.exp(-((1 - f) * dA[0] + f * dB[0]));
-        const g = Math.exp(-((1 - f) * dA[1] + f * dB[1]));
-        const b = Math.exp(-((1 - f) * dA[2] + f * dB[2]));
-        xyzToLabInto(M[0] * r + M[1] * g + M[2] * b, M[3] * r + M[4] * g + M[5] * b, M[6] * r + M[7] * g + M[8] * b, out, 0);
-        const dl = lab[t * 3] - out[0];
-        const da = lab[t * 3 + 1] - out[1];
-        const db = lab[t * 3 + 2] - out[2];
+        const fx = labFFast(xr * r + xg * g + xb * b);
+        const fy = labFFast(yr * r + yg * g + yb * b);
+        const fz = labFFast(zr * r + zg * g + zb * b);
+        const dl = lab[t * 3]! - (116 * fy - 16);
+        const da = lab[t * 3 + 1]! - 500 * (fx - fy);
+        const db = lab[t * 3 + 2]! - 200 * (fy - fz);
         sse += dl * dl + da * da + db * db;
+        r *= qr;
+        g *= qg;
+        b *= qb;
       }
       table[i * (maxT + 1) + m] = sse;
     }
@@ -212,14 +227,23 @@ export function segmentProfile(lab: Float64Array, n: number, params: SegmentPara
   const bFrom = Array.from({ length: K + 1 }, () => new Int32Array(n + 1).fill(-1));
   const tFrom = Array.from({ length: K + 1 }, () => new Int32Array(n + 1).fill(-1));
 
+  // A band's and a transition's costs do not depend on how many bands come before them: work
+  // each out once, not once per band count.
+  const flatCost = new Float64Array((n + 1) * (n + 1));
+  for (let j = minBand; j <= n; j++) for (let i = 0; i <= j - minBand; i++) flatCost[i * (n + 1) + j] = flat(i, j);
+  const W = maxTransition + 1;
+  const bridgeCost = new Float64Array((n + 1) * W);
+  for (let j = 0; j <= n; j++) for (let i = Math.max(0, j - maxTransition); i < j; i++) bridgeCost[j * W + (j - i)] = bridge(i, j);
+
   for (let k = 1; k <= K; k++) {
+    const prev = T[k - 1]!;
     for (let j = minBand; j <= n; j++) {
       let best = Infinity;
       let arg = -1;
       for (let i = 0; i <= j - minBand; i++) {
-        const before = k === 1 ? (i <= maxMargin ? ramp(0, i) : Infinity) : T[k - 1][i];
+        const before = k === 1 ? (i <= maxMargin ? ramp(0, i) : Infinity) : prev[i]!;
         if (before === Infinity) continue;
-        const c = before + flat(i, j);
+        const c = before + flatCost[i * (n + 1) + j]!;
         if (c < best) {
           best = c;
           arg = i;
@@ -228,12 +252,13 @@ export function segmentProfile(lab: Float64Array, n: number, params: SegmentPara
       B[k][j] = best;
       bFrom[k][j] = arg;
     }
+    const Bk = B[k]!;
     for (let j = 0; j <= n; j++) {
-      let best = B[k][j];
+      let best = Bk[j]!;
       let arg = j;
       for (let i = Math.max(0, j - maxTransition); i < j; i++) {
-        if (B[k][i] === Infinity) continue;
-        const c = B[k][i] + bridge(i, j);
+        if (Bk[i] === Infinity) continue;
+        const c = Bk[i]! + bridgeCost[j * W + (j - i)]!;
         if (c < best) {
           best = c;
           arg = i;

@@ -16,7 +16,8 @@ export type Orientation = "horizontal" | "vertical";
 /** "match" ΔE2000 ≤ 3, "close" ≤ 8, otherwise "no close ink" (our thresholds). */
 export type MatchConfidence = "match" | "close" | "no close ink";
 
-export type InkSuggestion = { inkId: number; name: string; brand: string; deltaE: number };
+/** A catalogue ink suggested for a band, with its reference colour so a page can show it beside the band. */
+export type InkSuggestion = { inkId: number; name: string; brand: string; deltaE: number; hex: string; lab: Lab };
 
 export type AnalysisBand = {
   index: number;

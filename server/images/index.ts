@@ -3,6 +3,7 @@ export { sniffImageType, sniffImageBytes, type ImageType, type SniffResult } fro
 export { readHeaderInfo, type HeaderInfo } from "./header-info";
 export {
   readImage,
+  readImageBytes,
   decodeImageBytes,
   downscaleImage,
   DEFAULT_MAX_BYTES,
@@ -12,7 +13,12 @@ export {
 } from "./read-image";
 export {
   makeDerivatives,
+  saveDerivatives,
   writeDerivatives,
+  encodeWebp,
+  smallCopy,
+  makePlaceholder,
+  makePhash,
   phashDistance,
   DISPLAY_LONG_EDGE,
   THUMB_LONG_EDGE,

@@ -76,8 +76,12 @@ async function toUprightRgb(pipeline: Sharp, maxLongEdge: number | undefined): P
  * allowed) → EXIF orientation → 8-bit sRGB. Throws ImageError for anything a member can fix.
  */
 export async function readImage(path: string, opts: ReadImageOptions = {}): Promise<DecodedImage> {
+  return decodeImageBytes(await readImageBytes(path, opts), opts);
+}
+
+/** The file's bytes, after checking it is there, not empty and not over the size limit (ImageError otherwise). */
+export async function readImageBytes(path: string, opts: Pick<ReadImageOptions, "maxBytes"> = {}): Promise<Buffer> {
   const maxBytes = opts.maxBytes ?? DEFAULT_MAX_BYTES;
-  const maxPixels = opts.maxPixels ?? DEFAULT_MAX_PIXELS;
   let size: number;
   try {
     size = (await stat(path)).size;
@@ -86,13 +90,11 @@ export async function readImage(path: string, opts: ReadImageOptions = {}): Prom
   }
   if (size === 0) throw new ImageError("empty", "This file is empty. Please choose the photo again.");
   if (size > maxBytes) throw new ImageError("too_large", `This photo is larger than ${mb(maxBytes)}. Please upload a smaller file (most phones can share a smaller size).`);
-  let bytes: Buffer;
   try {
-    bytes = await readFile(path);
+    return await readFile(path);
   } catch (cause) {
     throw new ImageError("unreadable", "We could not open this file. Please upload it again.", { cause });
   }
-  return decodeImageBytes(bytes, { ...opts, maxBytes, maxPixels });
 }
 
 /** As readImage, for bytes already in memory. */

@@ -23,7 +23,10 @@ export function createWorkerPool<Task, Result>(opts: {
     minThreads: 0,
     maxThreads,
     maxQueue,
-    idleTimeout: 30_000,
+    // A fresh thread runs its first few uploads 2–3× slower while V8 optimises the analysis
+    // (scripts/bench-analyze.ts prints the warm-up): keep warmed threads through a quiet spell,
+    // but still let them go (and their memory) when nobody posts for a while.
+    idleTimeout: 10 * 60_000,
   });
   return {
     run: (task) => pool.run(task) as Promise<Result>,

@@ -1,21 +1,24 @@
-import { mkdtemp, rm, writeFile } from "node:fs/promises";
+import { mkdtemp, readdir, rm, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { deltaE2000, hexToLab } from "../../shared/colour/index";
+import { deltaE2000, hexToLab, srgbToLab } from "../../shared/colour/index";
 import {
   NoStripError,
   analyzePixels,
   analyzeStripImage,
   confidenceFor,
-  rethrowTaskFailure,
+  processStripPhoto,
   segmentProfile,
   suggestInks,
   type CatalogueInk,
 } from "../../server/analysis/index";
+import { toCorrectedLab } from "../../server/analysis/corrected-lab";
+import { noPaper } from "../../server/analysis/paper-white";
+import { interquartileMean } from "../../server/analysis/read-profile";
 import { PrefixSums } from "../../server/analysis/segment-profile";
-import runAnalysisTask from "../../server/analysis/worker";
+import processUpload from "../../server/modules/uploads/upload-worker";
 import { renderScene, sceneToJpeg, seededRandom, syntheticCatalogue, type SceneSpec } from "../../server/demo/synthetic-photo";
 
 let dir: string;
@@ -51,6 +54,34 @@ function scene(overrides: Partial<SceneSpec> = {}): SceneSpec {
     ...overrides,
   };
 }
+
+describe("pixel reading", () => {
+  it("takes the interquartile mean exactly as the sorted definition does, ties and all", () => {
+    const g = seededRandom(31);
+    for (const n of [4, 5, 9, 100, 1001]) {
+      const values = Array.from({ length: n }, () => Math.round(g() * 40) / 4); // many ties
+      const sorted = [...values].sort((a, b) => a - b);
+      const lo = Math.floor(n / 4);
+      const expected = sorted.slice(lo, n - lo).reduce((s, v) => s + v, 0) / (n - 2 * lo);
+      expect(interquartileMean(values)).toBeCloseTo(expected, 10);
+    }
+    expect(interquartileMean([3, 1, 2])).toBe(2);
+  });
+
+  it("converts an uncorrected photo to the same CIELAB as shared/colour (culori), pixel by pixel", () => {
+    const g = seededRandom(32);
+    const w = 64;
+    const h = 16;
+    const data = Buffer.from(Array.from({ length: w * h * 3 }, () => Math.floor(g() * 256)));
+    const lab = toCorrectedLab({ width: w, height: h, data }, noPaper());
+    for (let p = 0; p < w * h; p++) {
+      const ref = srgbToLab(data[p * 3], data[p * 3 + 1], data[p * 3 + 2]);
+      expect(lab.lab[p * 3]).toBeCloseTo(ref.l, 3);
+      expect(lab.lab[p * 3 + 1]).toBeCloseTo(ref.a, 3);
+      expect(lab.lab[p * 3 + 2]).toBeCloseTo(ref.b, 3);
+    }
+  });
+});
 
 describe("segmentation (dynamic programming with a penalty)", () => {
   function profileOf(levels: { len: number; lab: [number, number, number] }[], noise: number, seed: number) {
@@ -177,7 +208,10 @@ describe("analyzeStripImage", () => {
       expect(Object.keys(b).sort()).toEqual(["confidence", "end", "hex", "index", "lab", "spread", "start", "suggestions"]);
       expect(b.hex).toMatch(/^#[0-9a-f]{6}$/);
       expect(b.confidence).toBe("match");
-      expect(Object.keys(b.suggestions[0]).sort()).toEqual(["brand", "deltaE", "inkId", "name"]);
+      expect(Object.keys(b.suggestions[0]).sort()).toEqual(["brand", "deltaE", "hex", "inkId", "lab", "name"]);
+      // The suggested ink's own reference colour comes along, for showing it beside the band.
+      const ink = catalogue.find((c) => c.id === b.suggestions[0].inkId)!;
+      expect([b.suggestions[0].hex, b.suggestions[0].lab]).toEqual([ink.hex, ink.lab]);
     }
     expect(r.transitions).toHaveLength(2);
     // Under a cool-white fluorescent cast the paper looks tinted as photographed, and is reported so.
@@ -247,31 +281,61 @@ describe("analyzeStripImage", () => {
   });
 });
 
-describe("worker entry (for piscina)", () => {
-  it("takes a plain task and returns a plain, cloneable outcome", async () => {
+describe("the upload pipeline (processStripPhoto, run by the upload worker)", () => {
+  it("analyses exactly as analyzeStripImage does, and writes the derivatives of the corrected photo", async () => {
+    const path = join(dir, "pipeline.jpg");
+    await writeFile(path, await sceneToJpeg(renderScene(scene({ illuminant: "A" })), 88));
+    const catalogue = syntheticCatalogue(30);
+    const out = { displayPath: join(dir, "pipe", "display.webp"), thumbPath: join(dir, "pipe", "thumb.webp") };
+    const done = await processStripPhoto(path, out, { catalogue });
+    expect(done.analysis).toEqual(await analyzeStripImage(path, { catalogue }));
+    expect([done.derivatives.display.width, done.derivatives.display.height]).toEqual([1000, 750]);
+    expect(done.derivatives.thumb.width).toBe(480);
+    expect(done.derivatives.phash).toMatch(/^[0-9a-f]{16}$/);
+    expect((await readdir(join(dir, "pipe"))).sort()).toEqual(["display.webp", "thumb.webp"]);
+    for (const k of ["decodeMs", "analysisMs", "analysisReadyMs", "totalMs"] as const) expect(done.timings[k]).toBeGreaterThan(0);
+    // Under incandescent light (CIE A) the paper was photographed orange; the display photo is
+    // adapted to D65 (Bradford), so the paper near a corner now reads neutral: a*, b* within 2.
+    const { data, info } = await sharp(out.displayPath).raw().toBuffer({ resolveWithObject: true });
+    const at = (x: number, y: number) => {
+      const i = (y * info.width + x) * info.channels;
+      return srgbToLab(data[i], data[i + 1], data[i + 2]);
+    };
+    const photographed = done.analysis.paper.lab;
+    expect(Math.hypot(photographed.a, photographed.b)).toBeGreaterThan(10);
+    const shown = at(Math.round(info.width * 0.06), Math.round(info.height * 0.08));
+    expect(Math.hypot(shown.a, shown.b)).toBeLessThan(2);
+  });
+
+  it("writes nothing when the photo has no strip", async () => {
+    const path = join(dir, "blank-pipe.jpg");
+    await writeFile(path, await sceneToJpeg(renderScene(scene({ bands: [{ start: 0, end: 1, lab: { l: 100, a: 0, b: 0 } }] })), 85));
+    const out = { displayPath: join(dir, "none", "display.webp"), thumbPath: join(dir, "none", "thumb.webp") };
+    await expect(processStripPhoto(path, out, { catalogue: [] })).rejects.toBeInstanceOf(NoStripError);
+    await expect(readdir(join(dir, "none"))).rejects.toThrow(/ENOENT/);
+  });
+});
+
+describe("upload worker entry (for piscina)", () => {
+  it("takes a plain job and returns a plain, cloneable result with the files it wrote", async () => {
     const path = join(dir, "worker.jpg");
     await writeFile(path, await sceneToJpeg(renderScene(scene()), 85));
     const catalogue = syntheticCatalogue(20);
-    const outcome = await runAnalysisTask({
-      path,
-      catalogue,
-      stash: [3],
-      derivatives: { displayPath: join(dir, "w-display.webp"), thumbPath: join(dir, "w-thumb.webp") },
-    });
-    expect(structuredClone(outcome)).toEqual(outcome);
-    expect(outcome.ok).toBe(true);
-    if (outcome.ok) {
-      expect(outcome.result.bands).toHaveLength(3);
-      expect(outcome.derivatives?.display.width).toBe(1000);
-      expect(outcome.derivatives?.phash).toMatch(/^[0-9a-f]{16}$/);
+    const result = await processUpload({ originalPath: path, outDir: join(dir, "w-out"), catalogue, stash: [3] });
+    expect(structuredClone(result)).toEqual(result);
+    expect(result.ok).toBe(true);
+    if (result.ok) {
+      expect(result.analysis.bands).toHaveLength(3);
+      expect(result.images).toMatchObject({ display: "display.webp", thumb: "thumb.webp", width: 1000, height: 750 });
+      expect(result.images.phash).toMatch(/^[0-9a-f]{16}$/);
+      expect((await readdir(join(dir, "w-out"))).sort()).toEqual(["display.webp", "thumb.webp"]);
     }
   });
 
-  it("returns member mistakes as data (a cloned Error would lose its code) and rethrows them typed", async () => {
+  it("returns member mistakes as data (a cloned Error would lose its code)", async () => {
     const path = join(dir, "notes.jpg");
     await writeFile(path, "not a photo");
-    const outcome = await runAnalysisTask({ path, catalogue: [] });
-    expect(outcome).toEqual({ ok: false, error: { name: "ImageError", code: "unsupported_type", message: expect.stringMatching(/\(text\)/) } });
-    expect(() => rethrowTaskFailure(outcome)).toThrow(/not a photo we can read/);
+    const result = await processUpload({ originalPath: path, outDir: join(dir, "n-out"), catalogue: [], stash: [] });
+    expect(result).toEqual({ ok: false, code: "unsupported_type", message: expect.stringMatching(/not a photo we can read \(text\)/) });
   });
 });

@@ -19,11 +19,15 @@ import {
   D65_WHITE,
   SRGB8_TO_LINEAR,
   SRGB_TO_XYZ,
+  XYZ_TO_SRGB,
+  cbrtFast,
+  labFFast,
   mulVec3,
   srgbDecode,
   srgbEncode,
   xyzToLabInto,
 } from "../../server/analysis/srgb-lab";
+import { correctToPaperWhite } from "../../server/analysis/correct-photo";
 import { seededRandom } from "../../server/demo/synthetic-photo";
 
 const sharma = JSON.parse(readFileSync(new URL("../fixtures/analysis/ciede2000-sharma-2005.json", import.meta.url), "utf8")) as {
@@ -142,6 +146,25 @@ describe("sRGB transfer function (IEC 61966-2-1:1999)", () => {
   });
 });
 
+describe("fast cube root of the per-pixel CIELAB conversion", () => {
+  it("agrees with Math.cbrt to 1e-8 (relative) over the range pixels reach, and falls back outside it", () => {
+    let worst = 0;
+    for (let t = 216 / 24389; t < 3; t *= 1.0007) worst = Math.max(worst, Math.abs(cbrtFast(t) - Math.cbrt(t)) / Math.cbrt(t));
+    expect(worst).toBeLessThan(1e-8);
+    expect(cbrtFast(27)).toBe(3);
+    expect(cbrtFast(0)).toBe(0);
+  });
+
+  it("gives CIE 15's f(t): the cube root above ε = (6/29)³, the straight line (κt + 16)/116 below", () => {
+    const eps = (6 / 29) ** 3;
+    const kappa = (29 / 3) ** 3;
+    expect(labFFast(eps / 2)).toBeCloseTo((kappa * (eps / 2) + 16) / 116, 12);
+    expect(labFFast(0.5)).toBeCloseTo(Math.cbrt(0.5), 9);
+    // The two pieces meet at ε: f(ε) = 6/29 either way.
+    expect(labFFast(eps)).toBeCloseTo(6 / 29, 9);
+  });
+});
+
 describe("hex and CIELAB", () => {
   it("round-trips every tested hex colour exactly", () => {
     const rand = seededRandom(3);
@@ -242,6 +265,20 @@ describe("Bradford chromatic adaptation", () => {
       expect(ours[1]).toBeCloseTo(ref.y, 6);
       expect(ours[2]).toBeCloseTo(ref.z, 6);
     }
+  });
+
+  it("corrects a photo so its paper white reads white, and leaves a photo of D65-white paper as it is", () => {
+    // A photo of paper lit by D50 (sRGB of the D50 white point), corrected against that paper.
+    const d50Lab = { l: 100, a: 0, b: 0 };
+    const lit = mulVec3(bradfordMatrix(D65_WHITE, D50), D65_WHITE);
+    const rgb = mulVec3(XYZ_TO_SRGB, lit).map((v) => Math.round(srgbEncode(Math.min(1, v)) * 255));
+    const photo = { width: 2, height: 1, data: Buffer.from([...rgb, ...rgb]) };
+    const paper = srgbToLab(rgb[0], rgb[1], rgb[2]);
+    expect(Math.hypot(paper.a, paper.b)).toBeGreaterThan(5); // D50 paper looks warm as photographed
+    const fixed = correctToPaperWhite(photo, paper);
+    for (const v of fixed.data) expect(v).toBeGreaterThanOrEqual(254);
+    const same = correctToPaperWhite({ width: 1, height: 1, data: Buffer.from([200, 120, 40]) }, d50Lab);
+    expect([...same.data]).toEqual([200, 120, 40]);
   });
 
   it("turns a white lit by D50 into a neutral under D65", () => {

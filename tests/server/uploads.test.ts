@@ -1,9 +1,10 @@
-import { mkdirSync, readdirSync, writeFileSync } from "node:fs";
+import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
+import { fileURLToPath } from "node:url";
 import sharp from "sharp";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { deltaE2000, srgbToLab } from "../../shared/colour";
+import { deltaE2000, srgbToLab, type Lab } from "../../shared/colour";
 import type { Ink } from "../../shared/schemas/inks";
 import type { Upload } from "../../shared/schemas/uploads";
 import { createTestApp, DEMO, signedIn, type TestApp } from "../setup/test-app";
@@ -83,6 +84,24 @@ describe("uploading a strip photo", () => {
     const o = (y * info.width + x) * info.channels;
     const paper = srgbToLab(data[o]!, data[o + 1]!, data[o + 2]!);
     expect(deltaE2000(paper, { l: paper.l, a: 0, b: 0 })).toBeLessThan(2);
+  });
+
+  it("takes a phone HEIC photo (HEVC): sniffed from its bytes, decoded and analysed in the pool", async () => {
+    // Made with heif-enc (x265) from a rendered strip of known truth: tests/fixtures/uploads/README.md.
+    const fixtures = fileURLToPath(new URL("../fixtures/uploads", import.meta.url));
+    const heic = readFileSync(path.join(fixtures, "strip-hevc.heic"));
+    const truth = JSON.parse(readFileSync(path.join(fixtures, "strip-hevc.truth.json"), "utf8")) as { bands: { lab: Lab }[] };
+    const agent = await signedIn(t, DEMO.member);
+    // Phones share it under any name; the bytes decide.
+    const res = await agent.post("/api/uploads").attach("image", heic, { filename: "IMG_0001.jpg", contentType: "image/jpeg" }).expect(202);
+    const upload = await waitForUpload(agent, res.body.id);
+    expect(upload.status).toBe("ready");
+    expect(upload.analysis!.orientation).toBe("vertical");
+    expect(upload.analysis!.bands).toHaveLength(truth.bands.length);
+    upload.analysis!.bands.forEach((band, i) => expect(deltaE2000(band.lab, truth.bands[i]!.lab)).toBeLessThan(3));
+    const row = await t.db.selectFrom("uploads").select(["mime", "original_key"]).where("id", "=", res.body.id).executeTakeFirstOrThrow();
+    expect(row.mime).toBe("image/heic");
+    expect(row.original_key).toMatch(/\.heic$/);
   });
 
   it("serves derivatives without EXIF or GPS, only to the owner and moderators", async () => {

@@ -1,4 +1,5 @@
 import type { Analysis } from "../../../shared/schemas/uploads";
+import type { StripPhotoTimings } from "../../analysis/process-strip-photo";
 
 export type CatalogueEntry = { id: number; name: string; brand: string; hex: string; lab: { l: number; a: number; b: number } };
 
@@ -18,5 +19,7 @@ export type UploadJobResult =
       analysis: Analysis;
       /** File names inside outDir, the placeholder as a data URL, the perceptual hash. */
       images: { display: string; thumb: string; placeholder: string; phash: string; width: number; height: number };
+      /** Where the time went (for the benchmark and logs). */
+      timings: StripPhotoTimings;
     }
   | { ok: false; code: string; message: string };

@@ -44,7 +44,7 @@ export async function boot(
     if (removed) logger.info({ removed }, "old drafts removed");
   };
   if (seeding) {
-    console.log("Posting the demo strips through the real analysis (first start only, about a minute)…");
+    console.log("Posting the demo strips through the real analysis (first start only, under a minute)…");
     logger.info(await seedDemoStrips({ db, services, logger }), "demo strips posted");
   }
   await cleanup();

@@ -127,3 +127,11 @@ test("a colour tapped on a strip photo opens a colour search for it", async ({ p
   await expect(page.getByRole("list", { name: "Colours in this search" })).toContainText(hex);
   await expect(page.getByTestId("result-summary")).toContainText(/found/);
 });
+
+test("a shared link naming an ink the catalogue does not know says so and searches without it", async ({ page }) => {
+  await page.goto("/search?ink=987654&paper=hot-press");
+  await expect(page.getByText("Some inks or brands in this search are not in the catalogue.")).toBeVisible();
+  await page.getByRole("button", { name: "Leave those out and search" }).click();
+  await expect(page).toHaveURL(/\/search\?paper=hot-press$/);
+  await expect(page.getByTestId("result-summary")).toContainText(/found/);
+});

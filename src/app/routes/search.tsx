@@ -26,10 +26,24 @@ import { effectiveSort, emptySearch, filterCount, loosenings, parseSearch, searc
 import { stashQueryOptions } from "../../features/stash/api/get-stash";
 import { StripList } from "../../features/strips/components/strip-list";
 import { StripMatch } from "../../features/strips/components/strip-match";
-import { errorMessage } from "../../lib/api-client";
+import { errorMessage, isApiError, type ApiError } from "../../lib/api-client";
 import { colourWords } from "../../lib/colour-words";
 import { plural } from "../../lib/format";
 import { hexToLab } from "../../../shared/colour";
+
+/** The search without the inks and brands the server says the catalogue does not know. */
+function withoutUnknown(search: SearchState, error: ApiError): SearchState {
+  const named = (field: string) => new Set((error.fields?.[field] ?? []).flatMap((m) => m.replace(/^[^:]*:/, "").split(",")).map((v) => v.trim()));
+  const inks = named("ink");
+  const notInks = named("notInk");
+  const brands = named("brand");
+  return {
+    ...search,
+    ink: search.ink.filter((id) => !inks.has(String(id))),
+    notInk: search.notInk.filter((id) => !notInks.has(String(id))),
+    brand: search.brand.filter((slug) => !brands.has(slug)),
+  };
+}
 
 function FilterSection({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -204,9 +218,15 @@ export default function SearchPage() {
             <Notice tone="error" title="The search could not be run" live>
               <p>{errorMessage(results.error)}</p>
               <div className="mt-3 flex flex-wrap gap-2">
-                <Button variant="secondary" onClick={() => void results.refetch()}>
-                  Try again
-                </Button>
+                {isApiError(results.error) && results.error.code === "unknown_filters" ? (
+                  <Button variant="secondary" onClick={() => go(withoutUnknown(search, results.error as ApiError))}>
+                    Leave those out and search
+                  </Button>
+                ) : (
+                  <Button variant="secondary" onClick={() => void results.refetch()}>
+                    Try again
+                  </Button>
+                )}
                 <Button variant="quiet" onClick={() => go(emptySearch)}>
                   Start a new search
                 </Button>

@@ -110,9 +110,15 @@ async function seedSavesAndStashes(db: Db, services: Services, rand: () => numbe
     for (const s of picks) await services.binders.addItem(binder.id, me, { stripId: s.id, note: "" });
     // A member owns the inks of the strips they blended, and a scattering of others.
     const ownStrips = published.filter((s) => s.author_id === me.id).map((s) => s.id);
-    const used = ownStrips.length
+    const used: Set<number> = ownStrips.length
       ? new Set((await db.selectFrom("strip_inks").select("ink_id").where("strip_id", "in", ownStrips).execute()).map((r) => r.ink_id))
       : new Set<number>();
+    // …and they are one ink short of a couple of strips they admired (all but one of its inks).
+    const admired = published.filter((s) => s.author_id !== me.id && rand() < 0.1).slice(0, 2);
+    for (const s of admired) {
+      const order = await db.selectFrom("strip_inks").select("ink_id").where("strip_id", "=", s.id).orderBy("position").execute();
+      for (const r of order.slice(0, -1)) used.add(r.ink_id);
+    }
     const stash = inkIds.filter((id) => used.has(id) || rand() < 0.12).map((inkId) => ({ inkId, runningLow: rand() < 0.15 }));
     await services.stash.replace(me, { items: stash });
   }

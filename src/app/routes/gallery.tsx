@@ -18,6 +18,11 @@ export default function GalleryPage() {
         documentTitle={sort === "saves" ? "Gallery, most saved" : "Gallery"}
         title="Gallery"
         intro="Blended strips from the community, each with its inks in order. Colours are given in words and numbers too."
+        actions={
+          <ButtonLink to="/search" variant="secondary">
+            Search by ink or colour
+          </ButtonLink>
+        }
       />
       <div className="mb-6 flex flex-wrap items-center justify-between gap-3">
         <h2 className="text-xl font-bold">{sort === "saves" ? "Most saved strips" : "Newest strips"}</h2>

@@ -95,3 +95,24 @@ export const Checkbox = forwardRef<HTMLInputElement, CheckboxProps>(function Che
     </div>
   );
 });
+
+type TextFieldProps = Omit<FieldProps, "children" | "className"> &
+  Omit<InputHTMLAttributes<HTMLInputElement>, "className"> & {
+    /** The wrapper's classes (label, hint, input and error together). */
+    className?: string;
+    inputClassName?: string;
+  };
+
+/** A Field holding one text input, wired to its label, hint and error (register() spreads onto it). */
+export const TextField = forwardRef<HTMLInputElement, TextFieldProps>(function TextField(
+  { label, labelContent, hint, error, optional, className, inputClassName, ...input },
+  ref,
+) {
+  return (
+    <Field label={label} labelContent={labelContent} hint={hint} error={error} optional={optional} className={className}>
+      {(f) => (
+        <TextInput ref={ref} id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} className={inputClassName} {...input} />
+      )}
+    </Field>
+  );
+});

@@ -4,7 +4,7 @@ import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { passwordInput } from "../../../../shared/schemas/accounts";
 import { Button } from "../../../components/ui/button";
-import { Field, TextInput } from "../../../components/ui/field";
+import { TextField } from "../../../components/ui/field";
 import { FormAlert } from "../../../components/ui/notice";
 import { toast } from "../../../components/ui/toast";
 import { errorMessage } from "../../../lib/api-client";
@@ -53,43 +53,29 @@ export function PasswordForm({ email, hasPassword }: { email: string; hasPasswor
       <input type="email" name="username" autoComplete="username" hidden readOnly value={email} />
       <FormAlert message={failure?.message} details={failure?.details} />
       {hasPassword && (
-        <Field label="Current password" error={errors.currentPassword?.message}>
-          {(f) => (
-            <TextInput
-              id={f.id}
-              aria-describedby={f.describedBy}
-              aria-invalid={f.invalid || undefined}
-              type="password"
-              autoComplete="current-password"
-              {...register("currentPassword")}
-            />
-          )}
-        </Field>
+        <TextField
+          label="Current password"
+          error={errors.currentPassword?.message}
+          type="password"
+          autoComplete="current-password"
+          {...register("currentPassword")}
+        />
       )}
-      <Field label="New password" hint="At least 10 characters. A few unrelated words work well." error={errors.newPassword?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            type="password"
-            autoComplete="new-password"
-            {...register("newPassword")}
-          />
-        )}
-      </Field>
-      <Field label="New password again" error={errors.repeatPassword?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            type="password"
-            autoComplete="new-password"
-            {...register("repeatPassword")}
-          />
-        )}
-      </Field>
+      <TextField
+        label="New password"
+        hint="At least 10 characters. A few unrelated words work well."
+        error={errors.newPassword?.message}
+        type="password"
+        autoComplete="new-password"
+        {...register("newPassword")}
+      />
+      <TextField
+        label="New password again"
+        error={errors.repeatPassword?.message}
+        type="password"
+        autoComplete="new-password"
+        {...register("repeatPassword")}
+      />
       <div>
         <Button type="submit" busy={isSubmitting} busyLabel="Saving…">
           {hasPassword ? "Change password" : "Set password"}

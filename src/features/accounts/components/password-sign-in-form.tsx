@@ -4,7 +4,7 @@ import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { emailSchema } from "../../../../shared/schemas/accounts";
 import { Button } from "../../../components/ui/button";
-import { Field, TextInput } from "../../../components/ui/field";
+import { TextField } from "../../../components/ui/field";
 import { FormAlert } from "../../../components/ui/notice";
 import { errorMessage } from "../../../lib/api-client";
 import { applyApiFieldErrors } from "../../../lib/form-errors";
@@ -46,32 +46,22 @@ export function PasswordSignInForm({ callbackUrl, onSignedIn }: { callbackUrl: s
         With your password
       </h2>
       <FormAlert message={failure?.message} details={failure?.details} />
-      <Field label="E-mail address" error={errors.email?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            type="email"
-            autoComplete="username"
-            inputMode="email"
-            spellCheck={false}
-            {...register("email")}
-          />
-        )}
-      </Field>
-      <Field label="Password" error={errors.password?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            type="password"
-            autoComplete="current-password"
-            {...register("password")}
-          />
-        )}
-      </Field>
+      <TextField
+        label="E-mail address"
+        error={errors.email?.message}
+        type="email"
+        autoComplete="username"
+        inputMode="email"
+        spellCheck={false}
+        {...register("email")}
+      />
+      <TextField
+        label="Password"
+        error={errors.password?.message}
+        type="password"
+        autoComplete="current-password"
+        {...register("password")}
+      />
       <div>
         <Button type="submit" busy={isSubmitting} busyLabel="Signing in…">
           Sign in

@@ -4,7 +4,7 @@ import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { profilePatch, type Me } from "../../../../shared/schemas/accounts";
 import { Button } from "../../../components/ui/button";
-import { Field, TextArea, TextInput } from "../../../components/ui/field";
+import { Field, TextArea, TextField } from "../../../components/ui/field";
 import { FormAlert } from "../../../components/ui/notice";
 import { toast } from "../../../components/ui/toast";
 import { errorMessage } from "../../../lib/api-client";
@@ -44,18 +44,14 @@ export function ProfileForm({ me }: { me: Me }) {
   return (
     <form noValidate onSubmit={submit} className="flex flex-col gap-5">
       <FormAlert message={failure?.message} details={failure?.details} />
-      <Field label="Name" hint="Shown beside your strips. 2 to 60 characters." error={errors.name?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            autoComplete="nickname"
-            maxLength={60}
-            {...register("name")}
-          />
-        )}
-      </Field>
+      <TextField
+        label="Name"
+        hint="Shown beside your strips. 2 to 60 characters."
+        error={errors.name?.message}
+        autoComplete="nickname"
+        maxLength={60}
+        {...register("name")}
+      />
       <Field
         label="About you"
         optional

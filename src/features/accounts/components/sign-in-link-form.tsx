@@ -4,7 +4,7 @@ import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { emailSchema } from "../../../../shared/schemas/accounts";
 import { Button } from "../../../components/ui/button";
-import { Field, TextInput } from "../../../components/ui/field";
+import { TextField } from "../../../components/ui/field";
 import { FormAlert } from "../../../components/ui/notice";
 import { errorMessage } from "../../../lib/api-client";
 import { applyApiFieldErrors } from "../../../lib/form-errors";
@@ -41,20 +41,15 @@ export function SignInLinkForm({ callbackUrl, onSent }: { callbackUrl: string; o
       </h2>
       <p className="text-ink-soft">No password needed: the link signs you in.</p>
       <FormAlert message={failure?.message} details={failure?.details} />
-      <Field label="E-mail address" error={errors.email?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            type="email"
-            autoComplete="email"
-            inputMode="email"
-            spellCheck={false}
-            {...register("email")}
-          />
-        )}
-      </Field>
+      <TextField
+        label="E-mail address"
+        error={errors.email?.message}
+        type="email"
+        autoComplete="email"
+        inputMode="email"
+        spellCheck={false}
+        {...register("email")}
+      />
       <div>
         <Button type="submit" variant="secondary" busy={isSubmitting} busyLabel="Sending…">
           E-mail me a sign-in link

@@ -4,7 +4,7 @@ import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { binderInput, visibilities } from "../../../../shared/schemas/binders";
 import { Button } from "../../../components/ui/button";
-import { Field, fieldErrorText, TextArea, TextInput } from "../../../components/ui/field";
+import { Field, fieldErrorText, TextArea, TextField } from "../../../components/ui/field";
 import { FormAlert } from "../../../components/ui/notice";
 import { errorMessage } from "../../../lib/api-client";
 import { applyApiFieldErrors } from "../../../lib/form-errors";
@@ -55,19 +55,15 @@ export function BinderForm({ defaultValues, submitLabel, busyLabel, onSubmit, on
   return (
     <form noValidate onSubmit={submit} className="flex flex-col gap-5">
       <FormAlert message={failure?.message} details={failure?.details} />
-      <Field label="Name" hint="Up to 80 characters, e.g. “Autumn cards”." error={errors.name?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            maxLength={80}
-            autoComplete="off"
-            autoFocus={autoFocus}
-            {...register("name")}
-          />
-        )}
-      </Field>
+      <TextField
+        label="Name"
+        hint="Up to 80 characters, e.g. “Autumn cards”."
+        error={errors.name?.message}
+        maxLength={80}
+        autoComplete="off"
+        autoFocus={autoFocus}
+        {...register("name")}
+      />
       <Field
         label="Description"
         optional

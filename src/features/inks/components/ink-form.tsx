@@ -5,7 +5,7 @@ import type { z } from "zod";
 import { deltaE2000, describeDeltaE, hexToLab, isHex, labToHex, normalizeHex, type Lab } from "../../../../shared/colour";
 import { inkInput, inkTypes, type Brand, type Ink, type InkType } from "../../../../shared/schemas/inks";
 import { Button } from "../../../components/ui/button";
-import { Checkbox, Field, fieldErrorText, SelectInput, TextInput } from "../../../components/ui/field";
+import { Checkbox, Field, fieldErrorText, SelectInput, TextInput, TextField } from "../../../components/ui/field";
 import { FormAlert, Notice } from "../../../components/ui/notice";
 import { errorMessage } from "../../../lib/api-client";
 import { applyApiFieldErrors } from "../../../lib/form-errors";
@@ -137,18 +137,7 @@ export function InkForm({ brands, ink, submitLabel, busyLabel, onSubmit, onCance
         </Notice>
       )}
 
-      <Field label="Name" error={errors.name?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            autoComplete="off"
-            maxLength={80}
-            {...register("name")}
-          />
-        )}
-      </Field>
+      <TextField label="Name" error={errors.name?.message} autoComplete="off" maxLength={80} {...register("name")} />
 
       <div className="flex flex-col gap-2">
         <Field label="Brand" error={errors.brandId?.message}>
@@ -253,20 +242,17 @@ export function InkForm({ brands, ink, submitLabel, busyLabel, onSubmit, onCance
                 ["b", "b*", "−128 to 128"],
               ] as const
             ).map(([key, label, range]) => (
-              <Field key={key} label={label} hint={range} error={errors.lab?.[key]?.message}>
-                {(f) => (
-                  <TextInput
-                    id={f.id}
-                    aria-describedby={f.describedBy}
-                    aria-invalid={f.invalid || undefined}
-                    type="number"
-                    step="any"
-                    inputMode="decimal"
-                    className="tabular-nums"
-                    {...register(`lab.${key}`, { setValueAs: toNumberOrUndefined })}
-                  />
-                )}
-              </Field>
+              <TextField
+                key={key}
+                label={label}
+                hint={range}
+                error={errors.lab?.[key]?.message}
+                type="number"
+                step="any"
+                inputMode="decimal"
+                inputClassName="tabular-nums"
+                {...register(`lab.${key}`, { setValueAs: toNumberOrUndefined })}
+              />
             ))}
             {errors.lab?.message && <p className="col-span-3 text-sm font-bold text-danger">! {errors.lab.message}</p>}
           </div>

@@ -6,7 +6,7 @@ import type { z } from "zod";
 import type { Role } from "../../../../shared/schemas/accounts";
 import { roleInput, standingInput, suspensionInput } from "../../../../shared/schemas/moderation";
 import { Button } from "../../../components/ui/button";
-import { Field, SelectInput, TextInput } from "../../../components/ui/field";
+import { Field, SelectInput, TextInput, TextField } from "../../../components/ui/field";
 import { FormAlert, Notice } from "../../../components/ui/notice";
 import { toast } from "../../../components/ui/toast";
 import { errorMessage } from "../../../lib/api-client";
@@ -112,21 +112,17 @@ function SuspensionForm({ memberId, memberName, onChanged }: Omit<MemberModerati
       <p className="text-sm text-ink-muted">A suspended member cannot post, report or save strips; their strips stay as they are. They are told why.</p>
       <FormAlert message={failure?.message} details={failure?.details} />
       <div className="grid gap-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,2fr)]">
-        <Field label="Days" hint="0 lifts a suspension." error={formState.errors.days?.message}>
-          {(f) => (
-            <TextInput
-              id={f.id}
-              aria-describedby={f.describedBy}
-              aria-invalid={f.invalid || undefined}
-              type="number"
-              inputMode="numeric"
-              min={0}
-              max={3650}
-              step={1}
-              {...register("days", { valueAsNumber: true })}
-            />
-          )}
-        </Field>
+        <TextField
+          label="Days"
+          hint="0 lifts a suspension."
+          error={formState.errors.days?.message}
+          type="number"
+          inputMode="numeric"
+          min={0}
+          max={3650}
+          step={1}
+          {...register("days", { valueAsNumber: true })}
+        />
         <Field label="Reason" hint="The member is told this." error={formState.errors.reason?.message}>
           {(f) => <TextInput id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} maxLength={300} {...register("reason")} />}
         </Field>

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from "react";
 import { Button } from "../../../components/ui/button";
-import { Field, SelectInput, TextInput } from "../../../components/ui/field";
+import { Field, SelectInput, TextField } from "../../../components/ui/field";
 import { logFilterProblems, logFiltersFromSearchParams, type LogFilters } from "../log-filters";
 import { logActions } from "../review-words";
 
@@ -49,34 +49,24 @@ export function ModerationLogFilters({ filters, onChange }: ModerationLogFilters
           </SelectInput>
         )}
       </Field>
-      <Field label="Strip number" error={problems.strip}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            inputMode="numeric"
-            autoComplete="off"
-            placeholder="e.g. 12"
-            value={strip}
-            onChange={(e) => setStrip(e.target.value)}
-          />
-        )}
-      </Field>
-      <Field label="Member id" error={problems.member}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            autoComplete="off"
-            spellCheck={false}
-            placeholder="from a member's page"
-            value={member}
-            onChange={(e) => setMember(e.target.value)}
-          />
-        )}
-      </Field>
+      <TextField
+        label="Strip number"
+        error={problems.strip}
+        inputMode="numeric"
+        autoComplete="off"
+        placeholder="e.g. 12"
+        value={strip}
+        onChange={(e) => setStrip(e.target.value)}
+      />
+      <TextField
+        label="Member id"
+        error={problems.member}
+        autoComplete="off"
+        spellCheck={false}
+        placeholder="from a member's page"
+        value={member}
+        onChange={(e) => setMember(e.target.value)}
+      />
       <Button type="submit" variant="secondary">
         Show
       </Button>

@@ -2,7 +2,7 @@ import { useId } from "react";
 import type { FieldErrors, UseFormRegister } from "react-hook-form";
 import type { z } from "zod";
 import { MAX_NOTES, paperLabels, papers, stripInput, toolLabels, tools } from "../../../../shared/schemas/strips";
-import { Checkbox, Field, fieldErrorText, SelectInput, TextArea, TextInput } from "../../../components/ui/field";
+import { Checkbox, Field, fieldErrorText, SelectInput, TextArea, TextField } from "../../../components/ui/field";
 
 /** The strip's details as the form checks them: stripInput without the upload and the ink order. */
 export const stripDetailsSchema = stripInput.pick({ title: true, notes: true, paper: true, tools: true, videoUrl: true });
@@ -21,18 +21,14 @@ export function StripDetailsFields({ register, errors }: StripDetailsFieldsProps
   const toolsError = errors.tools?.message ?? errors.tools?.root?.message;
   return (
     <div className="flex flex-col gap-6">
-      <Field label="Title" hint="A few words, e.g. “Sea to sand, soft joins”." error={errors.title?.message}>
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            autoComplete="off"
-            maxLength={100}
-            {...register("title")}
-          />
-        )}
-      </Field>
+      <TextField
+        label="Title"
+        hint="A few words, e.g. “Sea to sand, soft joins”."
+        error={errors.title?.message}
+        autoComplete="off"
+        maxLength={100}
+        {...register("title")}
+      />
 
       <Field
         label="Notes"
@@ -91,26 +87,18 @@ export function StripDetailsFields({ register, errors }: StripDetailsFieldsProps
         )}
       </fieldset>
 
-      <Field
+      <TextField
         label="Video link"
         optional
         hint="A link to a video of you blending this strip (http:// or https://)."
         error={errors.videoUrl?.message}
-      >
-        {(f) => (
-          <TextInput
-            id={f.id}
-            aria-describedby={f.describedBy}
-            aria-invalid={f.invalid || undefined}
-            type="url"
-            inputMode="url"
-            autoComplete="url"
-            placeholder="https://"
-            maxLength={500}
-            {...register("videoUrl")}
-          />
-        )}
-      </Field>
+        type="url"
+        inputMode="url"
+        autoComplete="url"
+        placeholder="https://"
+        maxLength={500}
+        {...register("videoUrl")}
+      />
     </div>
   );
 }

@@ -5,12 +5,12 @@ import { z } from "zod";
 import { actionLabels, bulkDecisionInput, decisionReasons } from "../../../../shared/schemas/moderation";
 import { statusLabels } from "../../../../shared/schemas/strips";
 import { Button } from "../../../components/ui/button";
-import { Field, SelectInput, TextArea } from "../../../components/ui/field";
 import { FormAlert, Notice } from "../../../components/ui/notice";
 import { errorMessage } from "../../../lib/api-client";
 import { plural } from "../../../lib/format";
 import { useDecideStrips, type BulkResult } from "../api/decide-strips";
 import { splitForBulk, type BulkAction, type Picked } from "../bulk";
+import { DecisionReasonFields } from "./decision-reason-fields";
 
 const bulkReasonSchema = bulkDecisionInput
   .pick({ action: true, reason: true, note: true })
@@ -80,25 +80,13 @@ function BulkForm({ action, picked, onCancel, onResults }: { action: BulkAction;
           </p>
         </Notice>
       )}
-      <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Reason" error={errors.reason?.message}>
-          {(f) => (
-            <SelectInput id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} autoFocus {...register("reason")}>
-              <option value="">Choose a reason…</option>
-              {decisionReasons[action].map((r) => (
-                <option key={r} value={r}>
-                  {r}
-                </option>
-              ))}
-            </SelectInput>
-          )}
-        </Field>
-        <Field label="Note" optional={reason !== "other"} error={errors.note?.message}>
-          {(f) => (
-            <TextArea id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} rows={2} maxLength={1000} className="min-h-11" {...register("note")} />
-          )}
-        </Field>
-      </div>
+      <DecisionReasonFields
+        action={action}
+        reason={reason}
+        reasonField={register("reason")}
+        noteField={register("note")}
+        errors={{ reason: errors.reason?.message, note: errors.note?.message }}
+      />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" variant={action === "hide" ? "danger" : "primary"} busy={isSubmitting} busyLabel="Deciding…" disabled={fit.length === 0}>
           {actionLabels[action]} {plural(fit.length, "strip")}

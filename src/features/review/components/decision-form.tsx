@@ -2,15 +2,15 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useId, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { actionLabels, decisionInput, decisionReasons, type DecisionAction } from "../../../../shared/schemas/moderation";
+import { actionLabels, decisionInput, type DecisionAction } from "../../../../shared/schemas/moderation";
 import { Button, type ButtonVariant } from "../../../components/ui/button";
-import { Field, SelectInput, TextArea } from "../../../components/ui/field";
 import { FormAlert, Notice } from "../../../components/ui/notice";
 import { toast } from "../../../components/ui/toast";
 import { errorMessage } from "../../../lib/api-client";
 import { applyApiFieldErrors } from "../../../lib/form-errors";
 import { isAlreadyDecided, useDecideStrip, type DecisionResult } from "../api/decide-strip";
 import { actionDone, withoutReloadHint } from "../review-words";
+import { DecisionReasonFields } from "./decision-reason-fields";
 
 export const actionVariant: Record<DecisionAction, ButtonVariant> = {
   approve: "primary",
@@ -99,38 +99,13 @@ export function DecisionForm({ strip, action, expectedVersion, onDone, onCancel,
       ) : (
         <FormAlert message={failure?.message} details={failure?.details} />
       )}
-      <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Reason" error={errors.reason?.message}>
-          {(f) => (
-            <SelectInput id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} autoFocus {...register("reason")}>
-              <option value="">Choose a reason…</option>
-              {decisionReasons[action].map((r) => (
-                <option key={r} value={r}>
-                  {r}
-                </option>
-              ))}
-            </SelectInput>
-          )}
-        </Field>
-        <Field
-          label="Note"
-          optional={reason !== "other"}
-          hint={reason === "other" ? "Say why: the reason “other” needs a note." : undefined}
-          error={errors.note?.message}
-        >
-          {(f) => (
-            <TextArea
-              id={f.id}
-              aria-describedby={f.describedBy}
-              aria-invalid={f.invalid || undefined}
-              rows={2}
-              maxLength={1000}
-              className="min-h-11"
-              {...register("note")}
-            />
-          )}
-        </Field>
-      </div>
+      <DecisionReasonFields
+        action={action}
+        reason={reason}
+        reasonField={register("reason")}
+        noteField={register("note")}
+        errors={{ reason: errors.reason?.message, note: errors.note?.message }}
+      />
       <p className="text-sm text-ink-muted">{toAuthor[action]}</p>
       <div className="flex flex-wrap gap-2">
         <Button type="submit" variant={actionVariant[action]} busy={isSubmitting} busyLabel="Saving…" disabled={failure?.late}>

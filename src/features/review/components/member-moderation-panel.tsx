@@ -6,7 +6,7 @@ import type { z } from "zod";
 import type { Role } from "../../../../shared/schemas/accounts";
 import { roleInput, standingInput, suspensionInput } from "../../../../shared/schemas/moderation";
 import { Button } from "../../../components/ui/button";
-import { Field, SelectInput, TextInput, TextField } from "../../../components/ui/field";
+import { Field, SelectInput, TextField } from "../../../components/ui/field";
 import { FormAlert, Notice } from "../../../components/ui/notice";
 import { toast } from "../../../components/ui/toast";
 import { errorMessage } from "../../../lib/api-client";
@@ -74,9 +74,7 @@ function StandingForm({ memberId, memberName, onChanged }: Omit<MemberModeration
             </SelectInput>
           )}
         </Field>
-        <Field label="Reason" error={formState.errors.reason?.message}>
-          {(f) => <TextInput id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} maxLength={300} {...register("reason")} />}
-        </Field>
+        <TextField label="Reason" error={formState.errors.reason?.message} maxLength={300} {...register("reason")} />
       </div>
       <div>
         <Button type="submit" variant="secondary" busy={formState.isSubmitting} busyLabel="Saving…">
@@ -123,9 +121,7 @@ function SuspensionForm({ memberId, memberName, onChanged }: Omit<MemberModerati
           step={1}
           {...register("days", { valueAsNumber: true })}
         />
-        <Field label="Reason" hint="The member is told this." error={formState.errors.reason?.message}>
-          {(f) => <TextInput id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} maxLength={300} {...register("reason")} />}
-        </Field>
+        <TextField label="Reason" hint="The member is told this." error={formState.errors.reason?.message} maxLength={300} {...register("reason")} />
       </div>
       <div>
         <Button type="submit" variant={lifting ? "secondary" : "danger"} busy={formState.isSubmitting} busyLabel="Saving…">
@@ -167,9 +163,7 @@ function RoleForm({ memberId, memberName, onChanged }: Omit<MemberModerationPane
             </SelectInput>
           )}
         </Field>
-        <Field label="Reason" error={formState.errors.reason?.message}>
-          {(f) => <TextInput id={f.id} aria-describedby={f.describedBy} aria-invalid={f.invalid || undefined} maxLength={300} {...register("reason")} />}
-        </Field>
+        <TextField label="Reason" error={formState.errors.reason?.message} maxLength={300} {...register("reason")} />
       </div>
       <div>
         <Button type="submit" variant="secondary" busy={formState.isSubmitting} busyLabel="Saving…">

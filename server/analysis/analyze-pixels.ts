@@ -8,7 +8,7 @@ import { findPaperWhite, paperSrgb8, type PaperEstimate } from "./paper-white";
 import { collectSamples, robustLab, readProfile, type Profile } from "./read-profile";
 import { DEFAULT_SEGMENT_PARAMS, segmentProfile, type Segment, type SegmentParams } from "./segment-profile";
 import { srgbToLab } from "../../shared/colour/index";
-import type { AnalysisBand, AnalysisResult, CatalogueInk, RgbImage, WhitePoint } from "./types";
+import type { AnalysisBand, AnalysisResult, CatalogueInk, Outline, RgbImage, WhitePoint } from "./types";
 
 export type AnalyzeOptions = {
   catalogue: readonly CatalogueInk[];
@@ -111,13 +111,27 @@ export function analyzePixels(img: RgbImage, opts: AnalyzeOptions): AnalysisResu
     };
   });
   const transitions = m.bands.slice(1).map((b, k) => ({ start: frac(m.bands[k].to), end: frac(b.from) }));
+  const outline = quadOf(m.geometry, img.width, img.height);
   return {
     orientation: m.geometry.orientation,
     paper: reportPaper(m.paper),
     bands,
     transitions,
     strip: stripOutline(m.geometry, img.width, img.height),
+    strips: [{ index: 0, outline, orientation: m.geometry.orientation, bands, transitions, notices: [] }],
+    notices: [],
   };
+}
+
+/** The strip's four corners as fractions of the image, in the order of Outline. */
+function quadOf(g: StripGeometry, width: number, height: number): Outline {
+  const h = g.thickness / 2;
+  const at = (u: number, v: number): [number, number] => [
+    round((g.origin[0] + g.along[0] * u + g.across[0] * v) / width, 4),
+    round((g.origin[1] + g.along[1] * u + g.across[1] * v) / height, 4),
+  ];
+  // across = along turned +90° on screen (y down), so -h is the left-hand side going along.
+  return [at(0, -h), at(g.length, -h), at(g.length, h), at(0, h)];
 }
 
 /** The strip's centre line and thickness as fractions of the image, for drawing its bands on the photo. */

@@ -34,6 +34,29 @@ export type AnalysisBand = {
 
 export type AnalysisTransition = { start: number; end: number };
 
+/**
+ * A strip's four corners as [x, y] fractions of the upright photo. Order: p0→p1 runs along the
+ * strip from its start (left end if horizontal, top end if vertical) to its far end, p1→p2 across
+ * the far end, p2→p3 back along the other long side, p3→p0 across the start; clockwise on screen.
+ * Under perspective the four corners are a general quadrilateral, not a rectangle.
+ */
+export type Outline = [[number, number], [number, number], [number, number], [number, number]];
+
+/** Something the member should know about a reading, in words (code for tests and clients). */
+export type AnalysisNotice = { code: string; message: string };
+
+/** One strip found in the photo, read on its own. */
+export type StripReading = {
+  /** Reading order: top to bottom, then left to right. */
+  index: number;
+  outline: Outline;
+  orientation: Orientation;
+  bands: AnalysisBand[];
+  transitions: AnalysisTransition[];
+  /** Why this reading may be off (glare over the strip, strip small in the frame…). */
+  notices: AnalysisNotice[];
+};
+
 export type AnalysisResult = {
   orientation: Orientation;
   /** The paper as photographed (before correction); found=false means no cast correction was made. */
@@ -42,4 +65,11 @@ export type AnalysisResult = {
   transitions: AnalysisTransition[];
   /** Centre line (fractions of width and height) and thickness (fraction of the long edge). */
   strip?: { start: { x: number; y: number }; end: { x: number; y: number }; thickness: number };
+  /**
+   * Every strip found, in reading order. `orientation`, `bands`, `transitions` and `strip` above
+   * describe strips[0], so single-strip clients keep working.
+   */
+  strips: StripReading[];
+  /** Notices about the whole photo (no paper white found, so taken as balanced…). */
+  notices: AnalysisNotice[];
 };

@@ -33,6 +33,30 @@ export type Analysis = {
   transitions: { start: number; end: number }[];
   /** Centre line (fractions of width and height) and thickness (fraction of the long edge). */
   strip?: { start: { x: number; y: number }; end: { x: number; y: number }; thickness: number };
+  /**
+   * Every strip found in the photo, in reading order (top to bottom, then left to right); the
+   * fields above describe strips[0]. Absent on analyses made before several-strip photos.
+   */
+  strips?: StripReading[];
+  /** Notices about the whole photo, in words (e.g. no paper white found, taken as balanced). */
+  notices?: AnalysisNotice[];
+};
+
+/**
+ * A strip's corners as [x, y] fractions of the upright photo: p0→p1 along the strip from its start
+ * (left or top end), p1→p2 across the far end, p2→p3 back, p3→p0 across the start; clockwise.
+ */
+export type Outline = [[number, number], [number, number], [number, number], [number, number]];
+
+export type AnalysisNotice = { code: string; message: string };
+
+export type StripReading = {
+  index: number;
+  outline: Outline;
+  orientation: "horizontal" | "vertical";
+  bands: AnalysisBand[];
+  transitions: { start: number; end: number }[];
+  notices: AnalysisNotice[];
 };
 
 export type UploadImages = { display: string; thumb: string; placeholder: string };

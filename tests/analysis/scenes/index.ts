@@ -4,6 +4,8 @@
 // SPLITS — which seeds are which (fixed; never move a seed between them):
 //   tuning   seeds 1–50 of every class 1–8       (400 scenes): the analysis's constants may be chosen on these;
 //   heldout  seeds 100001–100050 of every class   (400 scenes): only ever scored, never tuned on.
+// Seeds from 100001 up are all held-out side: the committed fixtures (tests/fixtures/scenes) and
+// the vitest subset (tests/analysis/scenes.test.ts) come from there; seeds below are tuning side.
 // A scene is (seed, class): the class fixes the scene's defining condition, the seed everything else.
 //
 // Rendering is physical where it matters to the analysis: reflectances in linear light, ink as
@@ -23,6 +25,8 @@ import type { SceneClass, SceneSpec, SceneTruth, StripTruth } from "./types";
 export type { SceneClass, SceneTruth, StripTruth, InkTruth } from "./types";
 export { CLASS_NAMES } from "./types";
 export type { RgbImage } from "./render";
+export { renderScene } from "./render";
+export type { SceneSpec } from "./types";
 export type { SceneOptions } from "./layout";
 
 export const CLASSES: SceneClass[] = [1, 2, 3, 4, 5, 6, 7, 8];
@@ -37,8 +41,10 @@ export function splitSeeds(split: Split): number[] {
   return Array.from({ length: s.count }, (_, i) => s.first + i);
 }
 
+/** Which side of the split a seed is on (the scored ranges are SPLITS; everything from 100001 up is held-out side). */
 export function splitOf(seed: number): SceneTruth["split"] {
-  for (const [name, s] of Object.entries(SPLITS)) if (seed >= s.first && seed < s.first + s.count) return name as Split;
+  if (seed >= SPLITS.heldout.first) return "heldout";
+  if (seed >= SPLITS.tuning.first) return "tuning";
   return "other";
 }
 
@@ -133,7 +139,7 @@ function truthOf(spec: SceneSpec): SceneTruth {
     renderedWidth: w,
     renderedHeight: h,
     quality: spec.quality,
-    desk: { kind: spec.desk.kind, sub: spec.desk.sub, colours: spec.desk.colours.map((lab) => relLab(labToLinear(lab), paper)) },
+    desk: { kind: spec.desk.kind, sub: spec.desk.sub, colours: spec.desk.colours.map((lab) => relLab(labToLinear(lab), paper)), clutter: spec.clutter.map((c) => c.kind) },
     card: cardTruth,
     light: {
       cct: Math.round(L.cct),
@@ -152,6 +158,7 @@ function truthOf(spec: SceneSpec): SceneTruth {
       streaks: spec.strips.some((s) => s.streaks),
       grain: Number(Math.max(...spec.strips.map((s) => s.grain)).toFixed(4)),
       blurPx: Number(spec.blurPx.toFixed(2)),
+      sharpen: spec.sharpen ? Number(spec.sharpen.amount.toFixed(2)) : 0,
       noise: Number(spec.noise.toFixed(4)),
     },
     whiteAvailable: L.cast,

@@ -6,7 +6,7 @@ import { illuminantXy, labFromLch } from "./colour";
 import { DESK_KINDS, makeDesk, type DeskKind } from "./desk";
 import { applyH, clipConvex, inv3, mul3, polygonArea, type Mat3, type Pt } from "./geometry";
 import { hash2 } from "./noise";
-import type { GlareSpec, InkSpec, SceneClass, SceneSpec, ShadowSpec, StripSpec } from "./types";
+import type { ClutterSpec, GlareSpec, InkSpec, SceneClass, SceneSpec, ShadowSpec, StripSpec } from "./types";
 
 type Rand = () => number;
 const U = (r: Rand, a: number, b: number) => a + (b - a) * r();
@@ -216,7 +216,7 @@ export function makeSpec(seed: number, cls: SceneClass, opts: SceneOptions = {})
       : cardLab
     : { l: U(rand, 91, 97), a: 0, b: 0 }; // no white in the photo: a neutral paper, so "taken as balanced" is right
   const stripPaper = labToLinear(stripLab) as [number, number, number];
-  const falloffRatio = !whiteAvailable ? 1 : cls === 4 ? U(rand, 0.6, 0.75) : chance(rand, 0.4) ? U(rand, 0.85, 0.97) : 1;
+  const falloffRatio = !whiteAvailable ? 1 : cls === 4 ? U(rand, 0.6, 0.75) : chance(rand, 0.6) ? U(rand, 0.82, 0.97) : 1;
   const paperCam = castM.slice(0, 3).map((_, i) => castM[i * 3] * stripPaper[0] + castM[i * 3 + 1] * stripPaper[1] + castM[i * 3 + 2] * stripPaper[2]);
   // The phone exposes the paper to 72–92 % of full scale; with no white in the photo, exactly to full scale (a balanced photo).
   const exposure = whiteAvailable ? U(rand, 0.72, 0.92) / Math.max(...paperCam) : 1 / Math.max(...paperCam);
@@ -278,11 +278,12 @@ export function makeSpec(seed: number, cls: SceneClass, opts: SceneOptions = {})
       inks,
       flats: lay.flats,
       joins: lay.joins,
-      mottle: cls === 5 ? U(rand, 0.06, 0.14) : U(rand, 0.01, 0.05),
+      mottle: cls === 5 ? U(rand, 0.08, 0.2) : U(rand, 0.03, 0.08),
       mottleScale: U(rand, 2, 12),
       streaks: cls === 5 ? chance(rand, 0.5) : chance(rand, 0.15),
       grain: cls === 5 ? U(rand, 0.02, 0.04) : U(rand, 0.004, 0.015),
       curl: U(rand, 0, 0.04),
+      edgeInk: chance(rand, 0.5) ? U(rand, -0.15, 0.25) : 0,
       seed: Math.floor(rand() * 1e9),
     });
   }
@@ -387,7 +388,10 @@ export function makeSpec(seed: number, cls: SceneClass, opts: SceneOptions = {})
   let offset: Pt = [U(rand, -1, 1) * objSize * (cls === 7 ? 0.8 : 0.25), U(rand, -1, 1) * objSize * (cls === 7 ? 0.8 : 0.25)];
   let H: Mat3 = [];
   let placed = false;
-  for (let attempt = 0; attempt < 40 && !placed; attempt++) {
+  // Aim off-centre first; if the strips leave the frame, bring the aim back to the middle, then
+  // step back (a smaller share) until every strip corner is at least 2.5 % inside the frame.
+  for (let attempt = 0; attempt < 120 && !placed; attempt++) {
+    if (attempt >= 8) offset = [0, 0];
     const T: Pt = [objCentre[0] + offset[0], objCentre[1] + offset[1]];
     let lo = Math.log(30);
     let hi = Math.log(20000);
@@ -399,8 +403,8 @@ export function makeSpec(seed: number, cls: SceneClass, opts: SceneOptions = {})
     }
     H = cameraH(T, Math.exp((lo + hi) / 2), tilt, az, f, width, height);
     if (inFrame(H, stripPts, width, height, 0.025)) placed = true;
-    else if (attempt % 4 === 3) target *= cardQuad && cls !== 7 ? 0.92 : 0.97;
-    else offset = [offset[0] * 0.6, offset[1] * 0.6];
+    else if (attempt < 8) offset = [offset[0] * 0.6, offset[1] * 0.6];
+    else target *= 0.96;
   }
   if (!placed) throw new Error(`scene ${seed}/${cls}: could not frame the strips`);
 
@@ -448,6 +452,29 @@ export function makeSpec(seed: number, cls: SceneClass, opts: SceneOptions = {})
   const contactLen = U(rand, 0.2, 1.0);
   const contact = { ox: contactLen * Math.cos(lightDir), oy: contactLen * Math.sin(lightDir), darkness: U(rand, 0.08, 0.3) };
 
+  // --- Clutter on the desk around the card (pencils, an ink pad, a sticky note, a roll of tape).
+  const clutter: ClutterSpec[] = [];
+  const nClutter = chance(rand, 0.35) ? 1 + Math.floor(rand() * 3) : 0;
+  const Hinv = inv3(H);
+  const keepOut = [...(cardQuad ? [cardQuad] : []), ...strips.map((s) => stripQuad(s, 8))];
+  for (let i = 0; i < nClutter; i++) {
+    const kind = pick(rand, ["pencil", "pencil", "ink-pad", "sticky-note", "tape-roll"] as const);
+    const colourLab = kind === "sticky-note" ? labFromLch(U(rand, 75, 90), U(rand, 40, 75), pick(rand, [95, 100, 0, 140, 250, 330])) : labFromLch(U(rand, 25, 70), U(rand, 10, 70), rand() * 360);
+    const innerLab = kind === "ink-pad" ? labFromLch(U(rand, 20, 60), U(rand, 10, 60), rand() * 360) : kind === "tape-roll" ? labFromLch(U(rand, 70, 85), U(rand, 5, 15), 80) : colourLab;
+    const [hw, hh, round, height] =
+      kind === "pencil" ? [3.5, U(rand, 70, 95), 3.5, 7] : kind === "ink-pad" ? [U(rand, 30, 50), U(rand, 30, 50), 6, 15] : kind === "sticky-note" ? [38, 38, 1, 1] : [U(rand, 22, 30), 0, 0, 14];
+    const shape = { hw, hh: kind === "tape-roll" ? hw : hh, round: kind === "tape-roll" ? hw : round };
+    for (let tries = 0; tries < 30; tries++) {
+      const [X, Y] = applyH(Hinv, [U(rand, -0.1, 1.1) * width, U(rand, -0.1, 1.1) * height]);
+      const angle = rand() * Math.PI;
+      const quad = rectCorners(X, Y, angle, 2 * shape.hh + 10, 2 * shape.hw + 10);
+      if (keepOut.some((q) => clipConvex(quad, q).length >= 3)) continue;
+      clutter.push({ kind, cx: X, cy: Y, angle: angle + Math.PI / 2, ...shape, colour: refl(colourLab), inner: refl(innerLab), height });
+      keepOut.push(quad);
+      break;
+    }
+  }
+
   return {
     seed,
     cls,
@@ -461,14 +488,20 @@ export function makeSpec(seed: number, cls: SceneClass, opts: SceneOptions = {})
     hfovDeg: hfov,
     layoutRotationDeg: psi / DEG,
     desk,
+    clutter,
     card,
     strips,
     light: { cct, xy, cast, camera, falloff, shadows, glares, contact, vignette: whiteAvailable ? U(rand, 0, 0.25) : U(rand, 0, 0.08) },
+    sharpen: chance(rand, 0.5) ? { amount: U(rand, 0.2, 0.8), sigma: U(rand, 0.8, 1.6) } : null,
     blurPx: (cls === 5 ? U(rand, 0.5, 1.3) : U(rand, 0.3, 1.0)) * (Math.max(width, height) / 1600),
     noise: cls === 5 ? U(rand, 0.015, 0.035) : U(rand, 0.006, 0.02),
     shadowOverStrip,
     glareOverStrip,
   };
+}
+
+function refl(lab: Lab): [number, number, number] {
+  return labToLinear(lab).map((v) => Math.min(0.95, Math.max(0.002, v))) as [number, number, number];
 }
 
 function insideQuad(p: Pt, q: Pt[]): boolean {

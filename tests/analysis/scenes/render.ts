@@ -96,6 +96,48 @@ export function renderScene(spec: SceneSpec): RgbImage {
   const lin = new Float32Array(w * h * 3);
   const tmp = new Float64Array(3);
   const halfDiag2 = (w * w + h * h) / 4;
+  const clutter = spec.clutter.map((c) => ({ ...c, c: Math.cos(c.angle), s: Math.sin(c.angle) }));
+  /** Objects on the desk with their own soft shadows, over the desk colour in `out`. */
+  const deskClutter = (X: number, Y: number, mm: number, out: Float64Array) => {
+    for (const o of clutter) {
+      const dx = X - o.cx;
+      const dy = Y - o.cy;
+      if (Math.abs(dx) > o.hh + 40 || Math.abs(dy) > o.hh + 40) continue;
+      const u = dx * o.c + dy * o.s;
+      const v = -dx * o.s + dy * o.c;
+      // Shadow: the outline shifted away from the light by its height, blurred by half its height.
+      const sx = u - (ct.ox * o.c + ct.oy * o.s) * o.height;
+      const sy = v - (-ct.ox * o.s + ct.oy * o.c) * o.height;
+      const sdS = boxSd(sx, sy, Math.max(0, o.hw - o.round), Math.max(0, o.hh - o.round)) - o.round;
+      const sh = 1 - Math.min(0.5, ct.darkness * 1.5) * smooth(0.5 - sdS / (0.5 * o.height + 1));
+      const sd = boxSd(u, v, Math.max(0, o.hw - o.round), Math.max(0, o.hh - o.round)) - o.round;
+      const cov = clamp01(0.5 - sd / mm);
+      let r = o.colour[0];
+      let g = o.colour[1];
+      let b = o.colour[2];
+      if (o.kind === "pencil") {
+        const k = 0.75 + 0.45 * Math.cos((Math.min(1, Math.abs(v) / o.hw) * Math.PI) / 2); // a round body: lit along the middle
+        r *= k;
+        g *= k;
+        b *= k;
+      } else if (o.kind !== "sticky-note") {
+        const innerSd = o.kind === "ink-pad" ? sd + 6 : sd + o.hw * 0.45;
+        const t = clamp01(0.5 - innerSd / mm);
+        const hole = o.kind === "tape-roll" ? clamp01(0.5 - (sd + o.hw * 0.7) / mm) : 0;
+        r = r + (o.inner[0] - r) * t;
+        g = g + (o.inner[1] - g) * t;
+        b = b + (o.inner[2] - b) * t;
+        if (hole > 0) {
+          r = r * (1 - hole) + out[0] * 0.8 * hole;
+          g = g * (1 - hole) + out[1] * 0.8 * hole;
+          b = b * (1 - hole) + out[2] * 0.8 * hole;
+        }
+      }
+      out[0] = out[0] * sh * (1 - cov) + r * cov;
+      out[1] = out[1] * sh * (1 - cov) + g * cov;
+      out[2] = out[2] * sh * (1 - cov) + b * cov;
+    }
+  };
   const shadowPrep = L.shadows.map((s) => ({ ...s, c: Math.cos(s.angle), s: Math.sin(s.angle) }));
 
   for (let y = 0; y < h; y++) {
@@ -146,7 +188,8 @@ export function renderScene(spec: SceneSpec): RgbImage {
           const li = Math.min(LUT_N - 1, Math.max(0, Math.floor(t * LUT_N))) * 3;
           // Mottle: low-frequency density noise (streaks: stretched along the strip), plus more ink in the paper's valleys.
           const mot = s.streaks ? fbm(u / (s.mottleScale * 4), v / (s.mottleScale * 0.4), s.seed + 3, 3) : fbm(u / s.mottleScale, v / s.mottleScale, s.seed + 3, 3);
-          const k = inkAmt * (1 + s.mottle * mot - 0.6 * grain);
+          const ev = vv * vv * vv * vv;
+          const k = inkAmt * (1 + s.mottle * mot - 0.6 * grain + s.edgeInk * ev * ev);
           r *= Math.exp(-s.lut[li] * k);
           g *= Math.exp(-s.lut[li + 1] * k);
           b *= Math.exp(-s.lut[li + 2] * k);
@@ -185,6 +228,7 @@ export function renderScene(spec: SceneSpec): RgbImage {
         }
         if (cCov < 1) {
           desk.at(X, Y, mm, tmp);
+          if (clutter.length) deskClutter(X, Y, mm, tmp);
           r += tmp[0] * (1 - cCov);
           g += tmp[1] * (1 - cCov);
           b += tmp[2] * (1 - cCov);
@@ -236,6 +280,13 @@ export function renderScene(spec: SceneSpec): RgbImage {
   }
 
   if (spec.blurPx > 0.2) gaussianBlur(lin, w, h, spec.blurPx);
+  if (spec.sharpen) {
+    // Phones sharpen: image + amount · (image − blurred image), which rings at edges (halos).
+    const soft = new Float32Array(lin);
+    gaussianBlur(soft, w, h, spec.sharpen.sigma);
+    const a = spec.sharpen.amount;
+    for (let i = 0; i < lin.length; i++) lin[i] += a * (lin[i] - soft[i]);
+  }
   return { width: w, height: h, data: encode(lin, spec.noise, spec.seed * 31 + spec.cls) };
 }
 

@@ -51,7 +51,7 @@ export type SceneTruth = {
   renderedWidth: number;
   renderedHeight: number;
   quality: number;
-  desk: { kind: DeskKind; sub: string; colours: Lab[] };
+  desk: { kind: DeskKind; sub: string; colours: Lab[]; clutter: string[] };
   card: { present: boolean; lab?: Lab; coverage?: number; deskSides?: number; corners?: Pt[] };
   light: {
     cct: number;
@@ -66,7 +66,7 @@ export type SceneTruth = {
     vignette: number;
   };
   camera: { tiltDeg: number; layoutRotationDeg: number; hfovDeg: number };
-  nuisances: { mottle: number; streaks: boolean; grain: number; blurPx: number; noise: number };
+  nuisances: { mottle: number; streaks: boolean; grain: number; blurPx: number; sharpen: number; noise: number };
   /** True when the photo holds paper white the analysis can use (a card, or a strip's white margins). */
   whiteAvailable: boolean;
   /** Reading order: rows top to bottom (strips whose on-screen vertical extents overlap by half the smaller one share a row), then left to right by centre. */
@@ -98,7 +98,25 @@ export type StripSpec = {
   streaks: boolean;
   grain: number;
   curl: number;
+  /** Extra ink density at the long edges (the blending tool drags or starves there), as a share. */
+  edgeInk: number;
   seed: number;
+};
+
+/** Things crafters leave on the desk beside the card: not strips, never to be read as one. */
+export type ClutterSpec = {
+  kind: "pencil" | "ink-pad" | "sticky-note" | "tape-roll";
+  cx: number;
+  cy: number;
+  angle: number;
+  hw: number;
+  hh: number;
+  round: number;
+  /** Outer colour and, for an ink pad or a tape roll, the inner one (linear reflectance). */
+  colour: [number, number, number];
+  inner: [number, number, number];
+  /** Height above the desk in mm: how far its shadow falls. */
+  height: number;
 };
 
 export type ShadowSpec = { cx: number; cy: number; angle: number; hw: number; hh: number; round: number; penumbra: number; darkness: number };
@@ -118,6 +136,7 @@ export type SceneSpec = {
   hfovDeg: number;
   layoutRotationDeg: number;
   desk: Desk;
+  clutter: ClutterSpec[];
   card: { cx: number; cy: number; angle: number; w: number; h: number; paper: [number, number, number]; grain: number; seed: number } | null;
   strips: StripSpec[];
   light: {
@@ -133,6 +152,8 @@ export type SceneSpec = {
     vignette: number;
   };
   blurPx: number;
+  /** Phone sharpening (unsharp mask on the linear image): amount and radius in px, or none. */
+  sharpen: { amount: number; sigma: number } | null;
   noise: number;
   shadowOverStrip: boolean;
   glareOverStrip: boolean;

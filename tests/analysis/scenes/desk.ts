@@ -211,8 +211,11 @@ export function makeDesk(rand: Rand, kind: DeskKind): Desk {
           out[1] = cb[1];
           out[2] = cb[2];
           for (let i = 0; i < cc.length; i++) {
-            const n = valueNoise(x / scale + i * 31.7, y / scale - i * 17.3, seed + 21 + i);
-            const t = edge((n - 0.55) * scale * 2, px);
+            // Chips: thresholded fractal noise on rotated axes, so their edges are irregular, not lattice-aligned.
+            const xr = (x * cr + y * sr) / scale;
+            const yr = (-x * sr + y * cr) / scale;
+            const n = fbm(xr + i * 31.7, yr - i * 17.3, seed + 21 + i, 3, 0.55);
+            const t = edge((n - 0.42) * scale * 1.5, px);
             if (t > 0) mix(out, out, cc[i], t);
           }
           const w = tex(x, y);

@@ -5,7 +5,7 @@ import { deltaE2000, labToHex, srgbToLab, type Lab } from "../../shared/colour/i
 import { findStrips, detectScene, type FoundStrip } from "./find-strips";
 import { suggestInks } from "./match-inks";
 import { evaluateField, findPaperWhite, noPaper, paperFromColour, paperFromRegion, paperSrgb8, type PaperEstimate } from "./paper-white";
-import { correctGrid, extendAlong, positionsFor, profileOf, robustRows, sampleStrip, sideWhite, type StripGrid, type StripLab } from "./read-strip";
+import { correctGrid, extendAlong, positionsFor, profileOf, robustRows, sampleStrip, sideWhite, type SideWhite, type StripGrid, type StripLab } from "./read-strip";
 import { DEFAULT_SEGMENT_PARAMS, segmentProfile, type SegmentParams } from "./segment-profile";
 import { orderQuad, readingOrder, type Point } from "./strip-quad";
 import type { AnalysisBand, AnalysisNotice, AnalysisResult, CatalogueInk, Outline, RgbImage, StripReading, WhitePoint } from "./types";
@@ -147,7 +147,7 @@ function measureBand(s: StripLab, profile: { lab: Float64Array }, from: number, 
   return { from, to, lab, spread };
 }
 
-function readOne(strip: FoundStrip, grid: StripGrid, paper: PaperEstimate, rowWhite: Float64Array | null, params: SegmentParams, trim: boolean): StripMeasurement {
+function readOne(strip: FoundStrip, grid: StripGrid, paper: PaperEstimate, rowWhite: SideWhite | null, params: SegmentParams, trim: boolean): StripMeasurement {
   const s = correctGrid(grid, paper, rowWhite);
   const profile = profileOf(s);
   const n = profile.n;
@@ -200,7 +200,7 @@ export function measurePhoto(img: RgbImage, opts: Pick<AnalyzeOptions, "white" |
     const card = scene.card;
     paper = paperFromRegion(img, (x, y) => x >= 0 && y >= 0 && x < w && y < h && card[y * w + x] === 1);
   }
-  const sample = (list: FoundStrip[]) => list.map((f) => sampleStrip(scene.maps.raw, scene.maps.clipped, w, h, f, positionsFor(f.length)));
+  const sample = (list: FoundStrip[]) => list.map((f) => sampleStrip(scene.maps.raw, scene.maps.clipped, scene.maps.glare, w, h, f, positionsFor(f.length)));
   let strips0 = found;
   let grids = sample(found);
   let margins: Margin[][] = grids.map((g) => findMargins(g));
@@ -234,7 +234,7 @@ export function measurePhoto(img: RgbImage, opts: Pick<AnalyzeOptions, "white" |
   }
   const p = paper;
   const strips = strips0.map((f, k) => {
-    let rowWhite: Float64Array | null = null;
+    let rowWhite: SideWhite | null = null;
     if (p.found && p.paperSamples > 0) rowWhite = sideWhite(grids[k], p);
     else if (margins[k].length === 2) {
       // Light falling off along a strip on the desk: even it out between its two white ends.
@@ -243,7 +243,8 @@ export function measurePhoto(img: RgbImage, opts: Pick<AnalyzeOptions, "white" |
       const lb = 0.2126 * b.colour[0] + 0.7152 * b.colour[1] + 0.0722 * b.colour[2];
       const mid = (la + lb) / 2;
       const rows = grids[k].rows;
-      rowWhite = Float64Array.from({ length: rows }, (_, r) => (la + ((lb - la) * (r + 0.5)) / rows) / mid);
+      const along = Float64Array.from({ length: rows }, (_, r) => (la + ((lb - la) * (r + 0.5)) / rows) / mid);
+      rowWhite = { side0: along, side1: along };
     }
     return readOne(f, grids[k], p, rowWhite, params, f.surface !== "paper" || !!opts.outlines?.length);
   });

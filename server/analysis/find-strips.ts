@@ -7,7 +7,7 @@ import { NoStripError } from "./no-strip-error";
 import { PAPER_MAX_TEXTURE, sceneMaps, type SceneMaps } from "./scene-maps";
 import { fitQuad, orderQuad, polygonArea, readingOrder, type OrderedQuad, type Point } from "./strip-quad";
 import type { RgbImage } from "./types";
-import { components, morph, type Component } from "./vision";
+import { components, minAreaRect, morph, type Component } from "./vision";
 
 export type StripSurface = "paper" | "desk" | "crop";
 
@@ -61,8 +61,31 @@ function judge(r: Region, maps: SceneMaps, surface: StripSurface): Verdict {
   return v;
 }
 
-function judgeRegion(r: Region, maps: SceneMaps, surface: StripSurface): Verdict {
+/**
+ * The region without thin spurs (a shadow's edge or a speck touching the strip): opened with a
+ * disc a third of the strip's own thickness (estimated from its minimum-area rectangle), keeping
+ * the largest piece.
+ */
+function trimmed(r: Region): Region {
+  const box = orderQuad(minAreaRect(r.pts));
+  const size = Math.max(3, Math.round(box.thickness / 3) | 1);
+  if (box.thickness < 9) return r;
+  const { left, top, width, height } = r.comp;
+  const pad = size;
+  const bw = width + 2 * pad;
+  const bh = height + 2 * pad;
+  const mask = new Uint8Array(bw * bh);
+  for (const [x, y] of r.pts) mask[(y - top + pad) * bw + (x - left + pad)] = 1;
+  const opened = morph(mask, bw, bh, "open", size);
+  const pieces = regionsOf(opened, bw, bh, () => true);
+  if (!pieces.length) return r;
+  const best = pieces.reduce((a, b) => (b.area > a.area ? b : a));
+  return { pts: best.pts.map(([x, y]) => [x + left - pad, y + top - pad] as Point), area: best.area, comp: r.comp };
+}
+
+function judgeRegion(region: Region, maps: SceneMaps, surface: StripSurface): Verdict {
   const { width: w, height: h } = maps;
+  const r = trimmed(region);
   const { quad, hullArea } = fitQuad(r.pts);
   const o = orderQuad(quad);
   const quadArea = polygonArea(o.corners);

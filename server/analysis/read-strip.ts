@@ -44,7 +44,7 @@ function bilinear(raw: Float32Array, w: number, h: number, x: number, y: number,
   return true;
 }
 
-export function sampleStrip(raw: Float32Array, clippedMap: Uint8Array, w: number, h: number, strip: { corners: readonly Point[]; length: number; thickness: number }, positions: number): StripGrid {
+export function sampleStrip(raw: Float32Array, clippedMap: Uint8Array, glareMap: Uint8Array, w: number, h: number, strip: { corners: readonly Point[]; length: number; thickness: number }, positions: number): StripGrid {
   const map = stripMap(strip.corners);
   const rows = positions * 2;
   const cols = Math.max(5, Math.min(31, Math.round((0.6 * strip.thickness) / 1.2)));
@@ -58,6 +58,7 @@ export function sampleStrip(raw: Float32Array, clippedMap: Uint8Array, w: number
   // Paper beside the strip: from 2 px (or 15 % of the thickness) to 5 px (or half of it) off the edge.
   const near = Math.max(2, 0.15 * strip.thickness) / strip.thickness;
   const far = Math.max(5, 0.5 * strip.thickness) / strip.thickness;
+  const glareAt = (x: number, y: number) => glareMap[Math.min(h - 1, Math.max(0, Math.round(y))) * w + Math.min(w - 1, Math.max(0, Math.round(x)))] === 1;
   const clipAt = (x: number, y: number) => clippedMap[Math.min(h - 1, Math.max(0, Math.round(y))) * w + Math.min(w - 1, Math.max(0, Math.round(x)))];
   for (let r = 0; r < rows; r++) {
     const s = (r + 0.5) / rows;
@@ -65,6 +66,7 @@ export function sampleStrip(raw: Float32Array, clippedMap: Uint8Array, w: number
       const t = INNER[0] + ((INNER[1] - INNER[0]) * (c + 0.5)) / cols;
       const [x, y] = map(s, t);
       const k = r * cols + c;
+      if (glareAt(x, y)) continue;
       if (bilinear(raw, w, h, x, y, rgb, k * 3)) clipped[k] = clipAt(x, y);
       pos[k * 2] = x / w - 0.5;
       pos[k * 2 + 1] = y / h - 0.5;
@@ -75,6 +77,7 @@ export function sampleStrip(raw: Float32Array, clippedMap: Uint8Array, w: number
         const t = side0 === 0 ? -off : 1 + off;
         const [x, y] = map(s, t);
         const k = (r * 2 + side0) * sideCols + c;
+        if (glareAt(x, y)) continue;
         if (bilinear(raw, w, h, x, y, side, k * 3)) sideClipped[k] = clipAt(x, y);
         sidePos[k * 2] = x / w - 0.5;
         sidePos[k * 2 + 1] = y / h - 0.5;
@@ -102,32 +105,12 @@ function runningMedian(v: Float64Array, half: number): Float64Array {
   return out;
 }
 
-/**
- * Per row, how bright the paper beside the strip is after the correction (1 = as white as the
- * paper's field says). A soft shadow or light falling off faster than the fitted field shows up
- * here first, so the strip is divided by it. Null when too little paper lies beside the strip.
- */
-export function sideWhite(grid: StripGrid, paper: PaperEstimate): Float64Array | null {
-  const { rows, sideCols } = grid;
-  const level = new Float64Array(rows).fill(NaN);
-  const lab = [0, 0, 0];
-  let found = 0;
-  for (let r = 0; r < rows; r++) {
-    const vals: number[] = [];
-    for (let k = r * 2 * sideCols; k < (r + 1) * 2 * sideCols; k++) {
-      if (grid.sideClipped[k] || Number.isNaN(grid.side[k * 3])) continue;
-      correctedLab(paper, grid.side[k * 3], grid.side[k * 3 + 1], grid.side[k * 3 + 2], grid.sidePos[k * 2], grid.sidePos[k * 2 + 1], 1, lab, 0);
-      // Paper: nearly neutral and not far below the field's white.
-      if (Math.hypot(lab[1], lab[2]) < 6 && lab[0] > 55) vals.push(labToXyz(lab[0], 0, 0)[1]);
-    }
-    if (vals.length >= 2) {
-      vals.sort((a, b) => a - b);
-      level[r] = vals[vals.length >> 1];
-      found++;
-    }
-  }
-  if (found < 0.3 * rows) return null;
+/** Per row, the paper's brightness on each side of the strip; t is the position across (0 → side 0, 1 → side 1). */
+export type SideWhite = { side0: Float64Array; side1: Float64Array };
+
+function fillAndSmooth(level: Float64Array, other: Float64Array | null, rows: number): Float64Array {
   const smooth = runningMedian(level, Math.max(2, Math.round(rows / 40)));
+  for (let r = 0; r < rows; r++) if (Number.isNaN(smooth[r]) && other && !Number.isNaN(other[r])) smooth[r] = other[r];
   // Fill gaps (glare, a neighbouring strip) by carrying the nearest known level.
   let last = NaN;
   for (let r = 0; r < rows; r++) if (Number.isNaN(smooth[r])) smooth[r] = last;
@@ -139,6 +122,40 @@ export function sideWhite(grid: StripGrid, paper: PaperEstimate): Float64Array |
   return smooth;
 }
 
+/**
+ * Per row and side, how bright the paper beside the strip is after the correction (1 = as white as
+ * the paper's field says). A soft shadow or light falling off faster than the fitted field shows up
+ * here first, so the strip is divided by it, interpolated across its width between the two sides
+ * (a shadow's edge crossing the strip at a slant reaches one side first). Null when too little
+ * paper lies beside the strip.
+ */
+export function sideWhite(grid: StripGrid, paper: PaperEstimate): SideWhite | null {
+  const { rows, sideCols } = grid;
+  const levels = [new Float64Array(rows).fill(NaN), new Float64Array(rows).fill(NaN)];
+  const lab = [0, 0, 0];
+  let found = 0;
+  for (let r = 0; r < rows; r++) {
+    for (let side = 0; side < 2; side++) {
+      const vals: number[] = [];
+      for (let k = (r * 2 + side) * sideCols; k < (r * 2 + side + 1) * sideCols; k++) {
+        if (grid.sideClipped[k] || Number.isNaN(grid.side[k * 3])) continue;
+        correctedLab(paper, grid.side[k * 3], grid.side[k * 3 + 1], grid.side[k * 3 + 2], grid.sidePos[k * 2], grid.sidePos[k * 2 + 1], 1, lab, 0);
+        // Paper: nearly neutral and not far below the field's white.
+        if (Math.hypot(lab[1], lab[2]) < 6 && lab[0] > 55) vals.push(labToXyz(lab[0], 0, 0)[1]);
+      }
+      if (vals.length >= 2) {
+        vals.sort((a, b) => a - b);
+        levels[side][r] = vals[vals.length >> 1];
+      }
+    }
+    if (!Number.isNaN(levels[0][r]) || !Number.isNaN(levels[1][r])) found++;
+  }
+  if (found < 0.3 * rows) return null;
+  const side0 = fillAndSmooth(levels[0], levels[1], rows);
+  const side1 = fillAndSmooth(levels[1], levels[0], rows);
+  return { side0, side1 };
+}
+
 export type StripLab = {
   rows: number;
   cols: number;
@@ -147,12 +164,13 @@ export type StripLab = {
   clipped: Uint8Array;
 };
 
-export function correctGrid(grid: StripGrid, paper: PaperEstimate, rowWhite: Float64Array | null): StripLab {
+export function correctGrid(grid: StripGrid, paper: PaperEstimate, white: SideWhite | null): StripLab {
   const { rows, cols } = grid;
   const lab = new Float32Array(rows * cols * 3).fill(NaN);
   for (let r = 0; r < rows; r++) {
-    const extra = rowWhite ? rowWhite[r] : 1;
     for (let c = 0; c < cols; c++) {
+      const t = INNER[0] + ((INNER[1] - INNER[0]) * (c + 0.5)) / cols;
+      const extra = white ? (1 - t) * white.side0[r] + t * white.side1[r] : 1;
       const k = r * cols + c;
       if (Number.isNaN(grid.rgb[k * 3])) continue;
       correctedLab(paper, grid.rgb[k * 3], grid.rgb[k * 3 + 1], grid.rgb[k * 3 + 2], grid.pos[k * 2], grid.pos[k * 2 + 1], extra, lab, k * 3);
@@ -180,25 +198,40 @@ export function robustRows(s: StripLab, r0: number, r1: number): [number, number
 }
 
 /** The profile: one robust colour per pair of rows. */
-export function profileOf(s: StripLab): { n: number; lab: Float64Array } {
+export function profileOf(s: StripLab): { n: number; lab: Float64Array; missing: Uint8Array } {
   const n = s.rows / 2;
   const lab = new Float64Array(n * 3);
+  const missing = new Uint8Array(n);
   for (let i = 0; i < n; i++) {
     const m = robustRows(s, 2 * i, 2 * i + 2);
     if (Number.isNaN(m[0])) {
-      if (i > 0) lab.copyWithin(i * 3, (i - 1) * 3, i * 3);
+      missing[i] = 1;
       continue;
     }
     lab[i * 3] = m[0];
     lab[i * 3 + 1] = m[1];
     lab[i * 3 + 2] = m[2];
   }
-  return { n, lab };
+  // Positions lost under glare: straight across from the last read position to the next one.
+  for (let i = 0; i < n; i++) {
+    if (!missing[i]) continue;
+    let j = i;
+    while (j < n && missing[j]) j++;
+    const a = i > 0 ? i - 1 : j < n ? j : -1;
+    const b = j < n ? j : a;
+    if (a < 0) break;
+    for (let k = i; k < j; k++) {
+      const f = b === a ? 0 : (k - a) / (b - a);
+      for (let c = 0; c < 3; c++) lab[k * 3 + c] = (1 - f) * lab[a * 3 + c] + f * lab[b * 3 + c];
+    }
+    i = j;
+  }
+  return { n, lab, missing };
 }
 
 /** Profile positions for a strip of this length in pixels. */
 export function positionsFor(length: number): number {
-  return Math.max(60, Math.min(300, Math.round(length / 2)));
+  return Math.max(60, Math.min(Number(process.env.BW_NPOS ?? 200), Math.round(length / 2)));
 }
 
 export type { FoundStrip };

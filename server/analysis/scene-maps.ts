@@ -17,8 +17,13 @@ export type SceneMaps = {
   lum: Float32Array;
   /** Rough CIELAB of the smoothed pixels, white = the paper's chromaticity at the local white level. */
   lab: Float32Array;
-  /** 1 where any 8-bit channel is clipped (glare). */
+  /** 1 where any 8-bit channel is clipped (glare, or a bright ink pushed past the file's range). */
   clipped: Uint8Array;
+  /**
+   * 1 on a glare spot and its halo: a blown-out white core (every channel near 255) and the ring
+   * around it where the specular reflection still adds light. Colours are never read there.
+   */
+  glare: Uint8Array;
   /** The paper's chromaticity (r/(r+g+b), g/(r+g+b)), or null when no bright neutral area exists. */
   paperChroma: [number, number] | null;
   /** Paper candidates: 1 where the pixel looks like paper for its neighbourhood. */
@@ -26,6 +31,25 @@ export type SceneMaps = {
   /** Local texture: |luminance − smoothed luminance| / smoothed, averaged nearby (paper ≈ 0.005, wood grain ≈ 0.03). */
   texture: Float32Array;
 };
+
+/**
+ * White paper under light from CIE D75 to CIE A, photographed in sRGB, has linear chromaticity
+ * (r, g) close to the segment between these two points (measured on our CAT02-rendered white; from
+ * our own rendering, not a standard). Fluorescent greens and magentas sit off it by up to ≈ 0.03.
+ */
+const LOCUS: [[number, number], [number, number]] = [
+  [0.3, 0.336],
+  [0.64, 0.284],
+];
+const LOCUS_TOL = 0.04;
+
+function offLocus(r: number, g: number): number {
+  const [[x0, y0], [x1, y1]] = LOCUS;
+  const dx = x1 - x0;
+  const dy = y1 - y0;
+  const t = Math.max(-0.1, Math.min(1.1, ((r - x0) * dx + (g - y0) * dy) / (dx * dx + dy * dy)));
+  return Math.hypot(r - (x0 + t * dx), g - (y0 + t * dy));
+}
 
 /** Cardstock is smooth: a region whose median local texture is above this is a desk, not paper. */
 export const PAPER_MAX_TEXTURE = 0.015;
@@ -37,7 +61,7 @@ export const PAPER_CHROMA_TOL = 0.016;
 /** A paper pixel is at least this share of the local white level. */
 export const PAPER_LOCAL_BRIGHTNESS = 0.8;
 /** Tiles across the long edge for the local white level. */
-const WHITE_TILES = 14;
+const WHITE_TILES = Number(process.env.BW_TILES ?? 24);
 
 /** Separable box blur of `channels` interleaved channels, radius r, edges clamped. */
 export function boxBlur(src: Float32Array, w: number, h: number, channels: number, r: number): Float32Array {
@@ -184,6 +208,65 @@ function localWhite(lum: Float32Array, chromaOk: Uint8Array, w: number, h: numbe
   return out;
 }
 
+/**
+ * Glare spots: connected blown-out whitish cores, each grown to a disc of GLARE_HALO × its own
+ * radius (+ 3 px): a glossy highlight's halo fades over a few times its core's radius (ours, from
+ * the tuning scenes).
+ */
+const GLARE_HALO = Number(process.env.BW_HALO ?? 3.5);
+function glareMask(data: Uint8Array, w: number, h: number, paperChroma: [number, number] | null): Uint8Array {
+  const out = new Uint8Array(w * h);
+  const seen = new Uint8Array(w * h);
+  const stack: number[] = [];
+  // Blown out in at least one channel and whitish in all (a yellow ink clips red but not blue).
+  const core = (p: number) => {
+    const r = data[p * 3];
+    const g = data[p * 3 + 1];
+    const b = data[p * 3 + 2];
+    if (Math.max(r, g, b) < 250) return false;
+    if (!paperChroma) return Math.min(r, g, b) >= 200;
+    // The highlight has the light's colour, which is the paper's colour as photographed.
+    const lr = SRGB8_TO_LINEAR[r];
+    const lg = SRGB8_TO_LINEAR[g];
+    const lb = SRGB8_TO_LINEAR[b];
+    const s = lr + lg + lb;
+    return Math.hypot(lr / s - paperChroma[0], lg / s - paperChroma[1]) < 0.08;
+  };
+  for (let start = 0; start < w * h; start++) {
+    if (seen[start] || !core(start)) continue;
+    let n = 0;
+    let sx = 0;
+    let sy = 0;
+    seen[start] = 1;
+    stack.push(start);
+    while (stack.length) {
+      const p = stack.pop()!;
+      const x = p % w;
+      const y = (p - x) / w;
+      n++;
+      sx += x;
+      sy += y;
+      for (const q of [x > 0 ? p - 1 : -1, x < w - 1 ? p + 1 : -1, y > 0 ? p - w : -1, y < h - 1 ? p + w : -1]) {
+        if (q >= 0 && !seen[q] && core(q)) {
+          seen[q] = 1;
+          stack.push(q);
+        }
+      }
+    }
+    // Tiny specks are noise; a huge "spot" is an over-exposed sheet, not a highlight.
+    if (n < 4 || n > 0.02 * w * h) continue;
+    const cx = sx / n;
+    const cy = sy / n;
+    const r = GLARE_HALO * Math.sqrt(n / Math.PI) + 3;
+    for (let y = Math.max(0, Math.floor(cy - r)); y <= Math.min(h - 1, Math.ceil(cy + r)); y++) {
+      for (let x = Math.max(0, Math.floor(cx - r)); x <= Math.min(w - 1, Math.ceil(cx + r)); x++) {
+        if ((x - cx) ** 2 + (y - cy) ** 2 <= r * r) out[y * w + x] = 1;
+      }
+    }
+  }
+  return out;
+}
+
 const EPS = 216 / 24389;
 const KAPPA = 24389 / 27;
 const f = (t: number) => (t > EPS ? Math.cbrt(t) : (KAPPA * t + 16) / 116);
@@ -226,7 +309,7 @@ export function sceneMaps(img: RgbImage): SceneMaps {
   // Bradford correction, decision 003). A wood or coloured desk is textured or off the locus.
   const brightIdx: number[] = [];
   for (let p = 0; p < n; p += 3) {
-    if (lum[p] < 0.6 * peak || clipped[p] || texture[p] > 0.02 || Math.abs(cg[p] - 1 / 3) > 0.04) continue;
+    if (lum[p] < 0.6 * peak || clipped[p] || texture[p] > 0.02 || offLocus(cr[p], cg[p]) > LOCUS_TOL) continue;
     brightIdx.push(p);
   }
   let paperChroma = peak > 0.02 ? modalChroma(cr, cg, Int32Array.from(brightIdx)) : null;
@@ -266,5 +349,5 @@ export function sceneMaps(img: RgbImage): SceneMaps {
     lab[p * 3 + 1] = 500 * (f(X) - fy);
     lab[p * 3 + 2] = 200 * (fy - f(Z));
   }
-  return { width: w, height: h, raw, rgb, lum, lab, clipped, paperChroma, paper, texture };
+  return { width: w, height: h, raw, rgb, lum, lab, clipped, paperChroma, paper, texture, glare: glareMask(data, w, h, paperChroma) };
 }

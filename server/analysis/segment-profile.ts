@@ -20,6 +20,12 @@ export type SegmentParams = {
    * long straight "blend" could stand in for a staircase of several flat bands.
    */
   maxTransitionShare: number;
+  /**
+   * Largest RMS distance (ΔE*ab) of a transition's samples from the blend it stands for. A real
+   * blend follows the mixing path within the noise; a staircase of flat patches (a grey scale) does
+   * not, however long — so long blends can be allowed without swallowing a staircase.
+   */
+  maxTransitionRms: number;
   /** Longest unread stretch at either end, as a share of the profile. */
   maxMarginShare: number;
   /** Profile noise (per channel, ΔE units) that the costs are tuned for; more noise scales costs down. */
@@ -31,7 +37,8 @@ export const DEFAULT_SEGMENT_PARAMS: SegmentParams = {
   gamma: 2,
   maxBands: 6,
   minBandShare: 0.03,
-  maxTransitionShare: 0.15,
+  maxTransitionShare: Number(process.env.BW_MAXT ?? 0.9),
+  maxTransitionRms: Number(process.env.BW_TRMS ?? 2.5),
   maxMarginShare: 0.02,
   referenceSigma: 0.6,
 };
@@ -217,8 +224,12 @@ export function segmentProfile(lab: Float64Array, n: number, params: SegmentPara
   // Each end of a transition is anchored on the mean of a shortest-band's worth of samples, all
   // inside the neighbouring bands, so a band cannot cheat by ending on a few samples of the next.
   const dTable = densityBridgeTable(lab, n, minBand, maxTransition);
-  const bridge = (i: number, j: number) =>
-    j > i ? Math.min(ps.bridge(i, j, n, minBand), dTable[i * (maxTransition + 1) + (j - i)]) / scale + params.gamma * (j - i) : 0;
+  const maxSse = (len: number) => len * Math.max(params.maxTransitionRms, 3 * sigma) ** 2;
+  const bridge = (i: number, j: number) => {
+    if (j <= i) return 0;
+    const sse = Math.min(ps.bridge(i, j, n, minBand), dTable[i * (maxTransition + 1) + (j - i)]);
+    return sse > maxSse(j - i) ? Infinity : sse / scale + params.gamma * (j - i);
+  };
 
   // B[k][j]: best cost of [0, j) whose last segment is band k ending at j.
   // T[k][j]: best cost of [0, j) after band k and a (possibly empty) transition ending at j.

@@ -28,10 +28,18 @@ export function loadVision(): Promise<void> {
   if (cv) return Promise.resolve();
   loading ??= (async () => {
     const require = createRequire(import.meta.url);
+    // The Emscripten build installs process-wide handlers that turn any unhandled rejection into
+    // an abort and print its whole 8 MB source on an uncaught error: take them off again.
+    const before = {
+      uncaughtException: new Set(process.listeners("uncaughtException")),
+      unhandledRejection: new Set(process.listeners("unhandledRejection")),
+    };
     let mod = require("@techstark/opencv-js") as Cv | Promise<Cv>;
     if (mod instanceof Promise) mod = await mod;
     const m = mod as Cv;
     if (!m.Mat) await new Promise<void>((resolve) => (m.onRuntimeInitialized = () => resolve()));
+    for (const l of process.listeners("uncaughtException")) if (!before.uncaughtException.has(l)) process.removeListener("uncaughtException", l);
+    for (const l of process.listeners("unhandledRejection")) if (!before.unhandledRejection.has(l)) process.removeListener("unhandledRejection", l);
     cv = m;
   })();
   return loading;

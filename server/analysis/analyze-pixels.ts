@@ -5,7 +5,8 @@ import { deltaE2000, labToHex, srgbToLab, type Lab } from "../../shared/colour/i
 import { findStrips, detectScene, type FoundStrip } from "./find-strips";
 import { suggestInks } from "./match-inks";
 import { evaluateField, findPaperWhite, noPaper, paperFromColour, paperFromRegion, paperSrgb8, type PaperEstimate } from "./paper-white";
-import { correctGrid, extendAlong, positionsFor, profileOf, robustRows, sampleStrip, sideWhite, type SideWhite, type StripGrid, type StripLab } from "./read-strip";
+import { ON_DESK, correctGrid, extendAlong, positionsFor, profileOf, robustRows, sampleStrip, sideWhite, type SideWhite, type StripGrid, type StripLab } from "./read-strip";
+import { LOCUS_TOL, offLocus } from "./scene-maps";
 import { DEFAULT_SEGMENT_PARAMS, segmentProfile, type SegmentParams } from "./segment-profile";
 import { orderQuad, readingOrder, type Point } from "./strip-quad";
 import type { AnalysisBand, AnalysisNotice, AnalysisResult, CatalogueInk, Outline, RgbImage, StripReading, WhitePoint } from "./types";
@@ -25,6 +26,7 @@ export type AnalyzeOptions = {
 export const MERGE_BANDS_DE = 2;
 /** A profile position this close to the paper white (ΔE*ab, darker only) is un-inked cardstock. */
 const UNINKED = 4;
+const UNINKED_ON_PAPER = 2.5;
 
 export type MeasuredBand = { from: number; to: number; lab: Lab; spread: number };
 
@@ -86,8 +88,8 @@ type Margin = { colour: [number, number, number]; at: "start" | "end"; length: n
 
 /**
  * The strip's own un-inked ends: a run from an end that is as bright as the brightest part of the
- * strip and one even colour. Both ends must agree when both look un-inked; a lone bright end must
- * be nearly neutral as photographed (a pale ink is not).
+ * strip and one even colour, and could be white paper under some light. Both ends must agree when
+ * both look un-inked.
  */
 function findMargins(grid: StripGrid): Margin[] {
   const prof = rawProfile(grid);
@@ -117,14 +119,15 @@ function findMargins(grid: StripGrid): Margin[] {
   };
   const a = run(0, 1);
   const b = run(n - 1, -1);
+  // White paper under some light: on the daylight–incandescent locus (a pale ink is off it).
   const neutral = (m: Margin) => {
     const s = m.colour[0] + m.colour[1] + m.colour[2];
-    return Math.hypot(m.colour[0] / s - 1 / 3, m.colour[1] / s - 1 / 3) < 0.05;
+    return offLocus(m.colour[0] / s, m.colour[1] / s) <= LOCUS_TOL;
   };
   if (a && b) {
     const ca = srgbLike(a.colour);
     const cb = srgbLike(b.colour);
-    return deltaE2000(ca, cb) < 6 ? [a, b] : [a, b].filter(neutral);
+    return (deltaE2000(ca, cb) < 6 ? [a, b] : [a, b]).filter(neutral);
   }
   return [a, b].filter((m): m is Margin => !!m && neutral(m));
 }
@@ -152,12 +155,27 @@ function readOne(strip: FoundStrip, grid: StripGrid, paper: PaperEstimate, rowWh
   const profile = profileOf(s);
   const n = profile.n;
   // Un-inked cardstock at the ends is not part of the blend.
-  const uninked = (i: number) => Math.hypot(Math.min(0, profile.lab[i * 3] - 100), profile.lab[i * 3 + 1], profile.lab[i * 3 + 2]) < UNINKED;
+  // On a card the limit is tighter: a white chart patch (L* 96.5) is a band, paper is not.
+  const limit = strip.surface === "paper" ? UNINKED_ON_PAPER : UNINKED;
+  const uninked = (i: number) => Math.hypot(Math.min(0, profile.lab[i * 3] - 100), profile.lab[i * 3 + 1], profile.lab[i * 3 + 2]) < limit;
   let from = 0;
   let to = n;
-  // (A strip found on the card already stops where its ink does: a white patch there is a band.)
-  while (trim && from < n && uninked(from)) from++;
-  while (trim && to > from && uninked(to - 1)) to--;
+  if (trim) {
+    // The outline may reach a few positions past the cardstock: look for the white run just inside.
+    const reach = Math.max(2, Math.round(0.05 * n));
+    let a = 0;
+    while (a < reach && !uninked(a)) a++;
+    if (a < reach) {
+      from = a;
+      while (from < n && uninked(from)) from++;
+    }
+    let b = n - 1;
+    while (b > n - 1 - reach && !uninked(b)) b--;
+    if (b > n - 1 - reach) {
+      to = b + 1;
+      while (to > from && uninked(to - 1)) to--;
+    }
+  }
   if (to - from < Math.max(10, 0.3 * n)) {
     from = 0;
     to = n;
@@ -190,7 +208,7 @@ export function measurePhoto(img: RgbImage, opts: Pick<AnalyzeOptions, "white" |
   checkWhite(opts.white);
   const { width: w, height: h } = img;
   const scene = detectScene(img);
-  const found = opts.outlines?.length ? readingOrder(givenStrips(opts.outlines, w, h)) : findStrips(scene);
+  let found = opts.outlines?.length ? readingOrder(givenStrips(opts.outlines, w, h)) : findStrips(scene);
   const params = { ...DEFAULT_SEGMENT_PARAMS, ...opts.segment };
   const notices: AnalysisNotice[] = [];
 
@@ -201,6 +219,9 @@ export function measurePhoto(img: RgbImage, opts: Pick<AnalyzeOptions, "white" |
     paper = paperFromRegion(img, (x, y) => x >= 0 && y >= 0 && x < w && y < h && card[y * w + x] === 1);
   }
   const sample = (list: FoundStrip[]) => list.map((f) => sampleStrip(scene.maps.raw, scene.maps.clipped, scene.maps.glare, w, h, f, positionsFor(f.length)));
+  // A strip on the desk may have lost an end whose colour the desk explains: walk on from each end.
+  // (Only for a lone strip: beside a neighbour, the "desk beside it" would be the next strip.)
+  if (!opts.outlines?.length && found.length === 1) found = found.map((f) => (f.surface === "desk" ? extendAlong(scene.maps.raw, w, h, f, noPaper(), ON_DESK) : f));
   let strips0 = found;
   let grids = sample(found);
   let margins: Margin[][] = grids.map((g) => findMargins(g));
@@ -246,7 +267,7 @@ export function measurePhoto(img: RgbImage, opts: Pick<AnalyzeOptions, "white" |
       const along = Float64Array.from({ length: rows }, (_, r) => (la + ((lb - la) * (r + 0.5)) / rows) / mid);
       rowWhite = { side0: along, side1: along };
     }
-    return readOne(f, grids[k], p, rowWhite, params, f.surface !== "paper" || !!opts.outlines?.length);
+    return readOne(f, grids[k], p, rowWhite, params, true);
   });
   return { paper: p, strips, notices };
 }

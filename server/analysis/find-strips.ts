@@ -21,6 +21,8 @@ export type Scene = {
 
 /** A paper region this share of the photo or more is a card (or the desk's own paper). */
 const CARD_MIN_SHARE = 0.04;
+/** Linear luminance (90th percentile) below which a frame-filling smooth "paper" is a pale desk (L* ≈ 92). */
+const PALE_DESK_MAX_LUM = 0.8;
 /** Shape of cut cardstock. */
 const MIN_ASPECT = 2.2;
 const MIN_THICKNESS_PX = 5;
@@ -56,9 +58,7 @@ const touchesBorder = (c: Component, w: number, h: number) => c.left <= 0 || c.t
 type Verdict = { strip: FoundStrip } | { reject: "too_small" | "not_strip_shaped" | "no_ink" };
 
 function judge(r: Region, maps: SceneMaps, surface: StripSurface): Verdict {
-  const v = judgeRegion(r, maps, surface);
-  if (process.env.BLENDWELL_DEBUG_STRIPS) console.error("region", surface, r.area, r.comp, "reject" in v ? v.reject : "strip");
-  return v;
+  return judgeRegion(r, maps, surface);
 }
 
 /**
@@ -89,7 +89,6 @@ function judgeRegion(region: Region, maps: SceneMaps, surface: StripSurface): Ve
   const { quad, hullArea } = fitQuad(r.pts);
   const o = orderQuad(quad);
   const quadArea = polygonArea(o.corners);
-  if (process.env.BLENDWELL_DEBUG_STRIPS) console.error("  quad", o.length.toFixed(0), o.thickness.toFixed(0), "fill", (r.area / hullArea).toFixed(2), "cover", (hullArea / quadArea).toFixed(2));
   if (o.thickness < MIN_THICKNESS_PX || o.length < MIN_LENGTH_SHARE * Math.max(w, h)) return { reject: "too_small" };
   if (o.length / o.thickness < MIN_ASPECT) return { reject: "not_strip_shaped" };
   if (r.area < MIN_FILL * hullArea || hullArea < MIN_QUAD_COVER * quadArea) return { reject: "not_strip_shaped" };
@@ -228,7 +227,18 @@ export function detectScene(img: RgbImage): Scene {
     const step = Math.max(1, Math.floor(r.pts.length / 3000));
     for (let i = 0; i < r.pts.length; i += step) tex.push(maps.texture[r.pts[i][1] * w + r.pts[i][0]]);
     tex.sort((a, b) => a - b);
-    return tex[tex.length >> 1] <= PAPER_MAX_TEXTURE;
+    if (tex[tex.length >> 1] > PAPER_MAX_TEXTURE) return false;
+    // A smooth pale desk filling the frame: it reaches all four edges of the photo and is
+    // photographed well below full scale (a card is always exposed near white or shows an edge).
+    const c = r.comp;
+    const allSides = c.left <= 0 && c.top <= 0 && c.left + c.width >= w && c.top + c.height >= h;
+    if (allSides) {
+      const lums: number[] = [];
+      for (let i = 0; i < r.pts.length; i += step) lums.push(maps.lum[r.pts[i][1] * w + r.pts[i][0]]);
+      lums.sort((a, b) => a - b);
+      if (lums[Math.floor(0.9 * (lums.length - 1))] < PALE_DESK_MAX_LUM) return false;
+    }
+    return true;
   });
   let card: Uint8Array | null = null;
   if (paperRegions.length) {

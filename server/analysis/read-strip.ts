@@ -231,23 +231,36 @@ export function profileOf(s: StripLab): { n: number; lab: Float64Array; missing:
 
 /** Profile positions for a strip of this length in pixels. */
 export function positionsFor(length: number): number {
-  return Math.max(60, Math.min(Number(process.env.BW_NPOS ?? 200), Math.round(length / 2)));
+  return Math.max(60, Math.min(200, Math.round(length / 2)));
 }
 
 export type { FoundStrip };
 
 /** ΔE*ab between a strip's middle and the paper beside it above which the strip goes on. */
 const STILL_STRIP = 2.5;
+/**
+ * On the desk: an end of the strip whose ink (or un-inked margin) the desk's colours happened to
+ * explain is still distinct from the desk just beside it; a textured desk differs from itself by
+ * less than this (ΔE*ab of medians), and a margin is at most 12 % of a strip.
+ */
+export const ON_DESK = { threshold: 8, maxShare: 0.2 };
 
 /**
  * A strip found on the card stops where its ink does; a near-white band at an end (a white chart
  * patch, a very pale ink) is paper-coloured enough to be taken for the card. Walk on from each end,
  * a pixel at a time, while the middle of the strip stays distinct from the paper just beside it.
  */
-export function extendAlong(raw: Float32Array, w: number, h: number, strip: FoundStrip, paper: PaperEstimate): FoundStrip {
+export function extendAlong(
+  raw: Float32Array,
+  w: number,
+  h: number,
+  strip: FoundStrip,
+  paper: PaperEstimate,
+  opts: { threshold: number; maxShare: number } = { threshold: STILL_STRIP, maxShare: 0.3 },
+): FoundStrip {
   const map = stripMap(strip.corners);
   const ds = 1 / Math.max(1, strip.length);
-  const maxSteps = Math.round(0.3 * strip.length);
+  const maxSteps = Math.round(opts.maxShare * strip.length);
   const off = Math.max(2, 0.2 * strip.thickness) / strip.thickness + 0.1;
   const rgb = new Float32Array(3);
   const lab = [0, 0, 0];
@@ -272,7 +285,7 @@ export function extendAlong(raw: Float32Array, w: number, h: number, strip: Foun
       const a = colourAt(s, inner);
       const b = colourAt(s, sides);
       if (!a || !b) break;
-      if (Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]) >= STILL_STRIP) {
+      if (Math.hypot(a[0] - b[0], a[1] - b[1], a[2] - b[2]) >= opts.threshold) {
         last = s;
         misses = 0;
       } else if (++misses >= 3) break;

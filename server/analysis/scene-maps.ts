@@ -41,9 +41,9 @@ const LOCUS: [[number, number], [number, number]] = [
   [0.3, 0.336],
   [0.64, 0.284],
 ];
-const LOCUS_TOL = 0.04;
+export const LOCUS_TOL = 0.04;
 
-function offLocus(r: number, g: number): number {
+export function offLocus(r: number, g: number): number {
   const [[x0, y0], [x1, y1]] = LOCUS;
   const dx = x1 - x0;
   const dy = y1 - y0;
@@ -61,7 +61,7 @@ export const PAPER_CHROMA_TOL = 0.016;
 /** A paper pixel is at least this share of the local white level. */
 export const PAPER_LOCAL_BRIGHTNESS = 0.8;
 /** Tiles across the long edge for the local white level. */
-const WHITE_TILES = Number(process.env.BW_TILES ?? 24);
+const WHITE_TILES = 24;
 
 /** Separable box blur of `channels` interleaved channels, radius r, edges clamped. */
 export function boxBlur(src: Float32Array, w: number, h: number, channels: number, r: number): Float32Array {
@@ -213,7 +213,7 @@ function localWhite(lum: Float32Array, chromaOk: Uint8Array, w: number, h: numbe
  * radius (+ 3 px): a glossy highlight's halo fades over a few times its core's radius (ours, from
  * the tuning scenes).
  */
-const GLARE_HALO = Number(process.env.BW_HALO ?? 3.5);
+const GLARE_HALO = 3.5;
 function glareMask(data: Uint8Array, w: number, h: number, paperChroma: [number, number] | null): Uint8Array {
   const out = new Uint8Array(w * h);
   const seen = new Uint8Array(w * h);

@@ -37,8 +37,8 @@ export const DEFAULT_SEGMENT_PARAMS: SegmentParams = {
   gamma: 2,
   maxBands: 6,
   minBandShare: 0.03,
-  maxTransitionShare: Number(process.env.BW_MAXT ?? 0.9),
-  maxTransitionRms: Number(process.env.BW_TRMS ?? 2.5),
+  maxTransitionShare: 0.9,
+  maxTransitionRms: 2.5,
   maxMarginShare: 0.02,
   referenceSigma: 0.6,
 };

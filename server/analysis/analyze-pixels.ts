@@ -224,7 +224,7 @@ export function measurePhoto(img: RgbImage, opts: Pick<AnalyzeOptions, "white" |
   if (!opts.outlines?.length && found.length === 1) found = found.map((f) => (f.surface === "desk" ? extendAlong(scene.maps.raw, w, h, f, noPaper(), ON_DESK) : f));
   let strips0 = found;
   let grids = sample(found);
-  let margins: Margin[][] = grids.map((g) => findMargins(g));
+  const margins: Margin[][] = grids.map((g) => findMargins(g));
   if (paper && !opts.white) {
     // A strip's own un-inked end clearly brighter than the "card" means the card is a pale desk.
     const p = paper;

@@ -32,6 +32,7 @@ import { analyzePhoto, measurePhoto, reportPaper } from "../server/analysis/anal
 import { correctToPaperWhite } from "../server/analysis/correct-photo";
 import { detectScene, findStrips } from "../server/analysis/find-strips";
 import { loadVision } from "../server/analysis/vision";
+import { makeScene, sceneToJpeg as sceneToJpegOfScene, sceneTruth, splitSeeds, type SceneTruth } from "../tests/analysis/scenes/index";
 import { ANALYSIS_LONG_EDGE, analyzeStripImage } from "../server/analysis/process-strip-photo";
 import { createApp } from "../server/app";
 import { loadConfig } from "../server/config";
@@ -268,11 +269,42 @@ async function main() {
 
     await breakdown(photo, catalogue);
 
+    // Photos as members take them (issue 11), from the scene generator's tuning split: a 12 MP
+    // photo of one strip on a card on a desk, and a photo of six strips. Analysis until the bands
+    // are known, against sharp's own decode + resize of the same file, interleaved.
+    const sceneRatio = async (label: string, cls: 1 | 6, want: (t: SceneTruth) => boolean) => {
+      const seed = splitSeeds("tuning").find((sd) => want(sceneTruth(sd, cls)))!;
+      const sc = makeScene(seed, cls);
+      const file = join(dir, `${label}.jpg`);
+      await writeFile(file, await sceneToJpegOfScene(sc));
+      const a: number[] = [];
+      const b: number[] = [];
+      let found = 0;
+      for (let i = 0; i < RUNS + 1; i++) {
+        let t0 = performance.now();
+        const r = await analyzeStripImage(file, { catalogue });
+        if (i > 0) a.push(performance.now() - t0);
+        found = r.strips.length;
+        t0 = performance.now();
+        await sharp(file).autoOrient().resize(1600, 1600, { fit: "inside" }).raw().toBuffer();
+        if (i > 0) b.push(performance.now() - t0);
+      }
+      const ratio = round(median(a) / median(b), 2);
+      console.log(`${label}: class ${cls} seed ${seed}, ${sc.truth.width} × ${sc.truth.height}, ${sc.truth.strips.length} strips (${found} found): analysis median ${round(median(a))} ms, sharp ${round(median(b))} ms, ratio ${ratio}`);
+      return ratio;
+    };
+    console.log("");
+    const deskRatio = await sceneRatio("desk photo", 1, (t) => t.width * t.height >= 11e6 && t.card.present);
+    const sixStripRatio = await sceneRatio("six strips", 6, (t) => t.strips.length === 6);
+    console.log(`deskRatio ${deskRatio} (target ≤ 1.5), sixStripRatio ${sixStripRatio} (target ≤ 3)`);
+
     const figures: Record<string, number> = { analyzeMedianMs, sharpBaselineMedianMs, ratio, peakRssMb };
     figures.healthP99Ms = round(healthP99Ms);
     figures.analysisOnlyMedianMs = analysisOnlyMedianMs;
     figures.analysisOnlyRatio = analysisOnlyRatio;
     figures.loadAverage1m = round(loadavg()[0]!, 2);
+    figures.deskRatio = deskRatio;
+    figures.sixStripRatio = sixStripRatio;
     console.log(JSON.stringify(figures));
   } finally {
     await rm(dir, { recursive: true, force: true });

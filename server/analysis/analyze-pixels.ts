@@ -7,7 +7,7 @@ import { suggestInks } from "./match-inks";
 import { evaluateField, findPaperWhite, noPaper, paperFromColour, paperFromRegion, paperSrgb8, type PaperEstimate } from "./paper-white";
 import { ON_DESK, correctGrid, extendAlong, positionsFor, profileOf, robustRows, sampleStrip, sideWhite, type SideWhite, type StripGrid, type StripLab } from "./read-strip";
 import { LOCUS_TOL, offLocus } from "./scene-maps";
-import { DEFAULT_SEGMENT_PARAMS, segmentProfile, type SegmentParams } from "./segment-profile";
+import { DEFAULT_SEGMENT_PARAMS, distanceFromMix, segmentProfile, type SegmentParams } from "./segment-profile";
 import { orderQuad, readingOrder, type Point } from "./strip-quad";
 import type { AnalysisBand, AnalysisNotice, AnalysisResult, CatalogueInk, Outline, RgbImage, StripReading, WhitePoint } from "./types";
 import { NoStripError } from "./no-strip-error";
@@ -27,6 +27,9 @@ export const MERGE_BANDS_DE = 2;
 /** A profile position this close to the paper white (ΔE*ab, darker only) is un-inked cardstock. */
 const UNINKED = 4;
 const UNINKED_ON_PAPER = 2.5;
+/** A band at most this share of the strip, within MIX_BAND_DE (ΔE2000) of a mix of its neighbours, is blend. */
+const MIX_BAND_MAX_SHARE = 0.06;
+const MIX_BAND_DE = 8;
 
 export type MeasuredBand = { from: number; to: number; lab: Lab; spread: number };
 
@@ -183,6 +186,12 @@ function readOne(strip: FoundStrip, grid: StripGrid, paper: PaperEstimate, rowWh
   const sub = profile.lab.subarray(from * 3, to * 3);
   const seg = segmentProfile(sub, to - from, params);
   let bands = seg.bands.map((b) => measureBand(s, profile, b.from + from, b.to + from));
+  // A short band on the mixing path between its neighbours is the middle of their blend.
+  for (let k = 1; k + 1 < bands.length; ) {
+    const short = bands[k].to - bands[k].from <= MIX_BAND_MAX_SHARE * (to - from);
+    if (short && distanceFromMix(bands[k].lab, bands[k - 1].lab, bands[k + 1].lab) < MIX_BAND_DE) bands = [...bands.slice(0, k), ...bands.slice(k + 1)];
+    else k++;
+  }
   for (let k = 0; k + 1 < bands.length; ) {
     if (deltaE2000(bands[k].lab, bands[k + 1].lab) < MERGE_BANDS_DE) {
       const merged = measureBand(s, profile, bands[k].from, bands[k + 1].to);

@@ -231,7 +231,7 @@ export function profileOf(s: StripLab): { n: number; lab: Float64Array; missing:
 
 /** Profile positions for a strip of this length in pixels. */
 export function positionsFor(length: number): number {
-  return Math.max(60, Math.min(200, Math.round(length / 2)));
+  return Math.max(60, Math.min(300, Math.round(length / 2)));
 }
 
 export type { FoundStrip };

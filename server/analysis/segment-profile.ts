@@ -1,5 +1,6 @@
 // Optimal 1-D segmentation of a colour profile into bands (flat) and transitions (blends) by
 // dynamic programming with a penalty per band. See docs/decisions/002-strip-segmentation.md.
+import { deltaE2000, type Lab } from "../../shared/colour/index";
 import { D65_WHITE, SRGB_TO_XYZ, XYZ_TO_SRGB, labFFast, labToXyz, mulVec3 } from "./srgb-lab";
 
 export type Segment = { from: number; to: number }; // sample indices, [from, to)
@@ -38,7 +39,7 @@ export const DEFAULT_SEGMENT_PARAMS: SegmentParams = {
   maxBands: 6,
   minBandShare: 0.03,
   maxTransitionShare: 0.9,
-  maxTransitionRms: 2.5,
+  maxTransitionRms: 6,
   maxMarginShare: 0.02,
   referenceSigma: 0.6,
 };
@@ -205,6 +206,62 @@ function densityBridgeTable(lab: Float64Array, n: number, w: number, maxT: numbe
 }
 
 /**
+ * The same as densityBridgeTable for a blend straight in linear reflectance: ink laid as a
+ * pattern of dots or sponge texture, where what blends is the area covered, not the layer
+ * thickness (decision 006; the third path decision 002 left room for).
+ */
+function reflectanceBridgeTable(lab: Float64Array, n: number, w: number, maxT: number): Float64Array {
+  const table = new Float64Array((n + 1) * (maxT + 1)).fill(Infinity);
+  const mean = (from: number, to: number) => {
+    const m = [0, 0, 0];
+    for (let t = from; t < to; t++) for (let c = 0; c < 3; c++) m[c] += lab[t * 3 + c] / (to - from);
+    return m;
+  };
+  const dens = new Float64Array(n * 3);
+  for (let j = 0; j < n; j++) {
+    const m = mean(j, Math.min(n, j + w));
+    dens.set(density(m[0], m[1], m[2]), j * 3);
+  }
+  // sRGB → XYZ rows, divided by the white's X and Z (CIELAB's X/Xn, Z/Zn).
+  const M = SRGB_TO_XYZ;
+  const xr = M[0] / D65_WHITE[0], xg = M[1] / D65_WHITE[0], xb = M[2] / D65_WHITE[0];
+  const yr = M[3], yg = M[4], yb = M[5];
+  const zr = M[6] / D65_WHITE[2], zg = M[7] / D65_WHITE[2], zb = M[8] / D65_WHITE[2];
+  for (let i = 1; i < n; i++) {
+    const a = mean(Math.max(0, i - w), i);
+    const dA = density(a[0], a[1], a[2]);
+    for (let m = 1; m <= maxT && i + m < n; m++) {
+      const o = (i + m) * 3;
+      // Reflectance at t = i is exp(−((1 − f)·dA + f·dB)) with f = 1/(m + 1); each step multiplies it by q.
+      const ra = Math.exp(-dA[0]);
+      const ga = Math.exp(-dA[1]);
+      const ba = Math.exp(-dA[2]);
+      const qr = (Math.exp(-dens[o]!) - ra) / (m + 1);
+      const qg = (Math.exp(-dens[o + 1]!) - ga) / (m + 1);
+      const qb = (Math.exp(-dens[o + 2]!) - ba) / (m + 1);
+      let r = ra + qr;
+      let g = ga + qg;
+      let b = ba + qb;
+      let sse = 0;
+      for (let t = i; t < i + m; t++) {
+        const fx = labFFast(xr * r + xg * g + xb * b);
+        const fy = labFFast(yr * r + yg * g + yb * b);
+        const fz = labFFast(zr * r + zg * g + zb * b);
+        const dl = lab[t * 3]! - (116 * fy - 16);
+        const da = lab[t * 3 + 1]! - 500 * (fx - fy);
+        const db = lab[t * 3 + 2]! - 200 * (fy - fz);
+        sse += dl * dl + da * da + db * db;
+        r += qr;
+        g += qg;
+        b += qb;
+      }
+      table[i * (maxT + 1) + m] = sse;
+    }
+  }
+  return table;
+}
+
+/**
  * Minimises Σ bands (flat SSE + β) + Σ transitions (SSE from a blend between the neighbouring
  * bands, straight in CIELAB or in optical density, whichever fits better, + γ·length) + end margins (free line SSE + γ·length) over all layouts
  * margin · band · (transition · band)* · margin with 1..maxBands bands.
@@ -224,10 +281,12 @@ export function segmentProfile(lab: Float64Array, n: number, params: SegmentPara
   // Each end of a transition is anchored on the mean of a shortest-band's worth of samples, all
   // inside the neighbouring bands, so a band cannot cheat by ending on a few samples of the next.
   const dTable = densityBridgeTable(lab, n, minBand, maxTransition);
+  const rTable = reflectanceBridgeTable(lab, n, minBand, maxTransition);
   const maxSse = (len: number) => len * Math.max(params.maxTransitionRms, 3 * sigma) ** 2;
   const bridge = (i: number, j: number) => {
     if (j <= i) return 0;
-    const sse = Math.min(ps.bridge(i, j, n, minBand), dTable[i * (maxTransition + 1) + (j - i)]);
+    const k = i * (maxTransition + 1) + (j - i);
+    const sse = Math.min(ps.bridge(i, j, n, minBand), dTable[k], rTable[k]);
     return sse > maxSse(j - i) ? Infinity : sse / scale + params.gamma * (j - i);
   };
 
@@ -308,4 +367,29 @@ export function segmentProfile(lab: Float64Array, n: number, params: SegmentPara
   }
   bands.reverse();
   return { bands, costByCount, sigma };
+}
+
+/**
+ * How far (ΔE2000) a colour is from every mix of two inks: the blend straight in optical density
+ * (dye over dye) and straight in linear reflectance (area coverage), 41 steps each. A short band
+ * that sits on that path is the middle of a blend between its neighbours, not an ink of its own
+ * (issue 11: "the band count is the ink count").
+ */
+export function distanceFromMix(c: Lab, a: Lab, b: Lab): number {
+  const lin = (x: Lab) => mulVec3(XYZ_TO_SRGB, labToXyz(x.l, x.a, x.b)).map((v) => Math.max(1e-4, v));
+  const ra = lin(a);
+  const rb = lin(b);
+  let best = Infinity;
+  for (let k = 0; k <= 40; k++) {
+    const f = k / 40;
+    for (const mode of [0, 1]) {
+      const rgb = ra.map((va, ch) => (mode === 0 ? Math.exp((1 - f) * Math.log(va) + f * Math.log(rb[ch])) : (1 - f) * va + f * rb[ch]));
+      const xyz = mulVec3(SRGB_TO_XYZ, rgb);
+      const fx = labFFast(xyz[0] / D65_WHITE[0]);
+      const fy = labFFast(xyz[1]);
+      const fz = labFFast(xyz[2] / D65_WHITE[2]);
+      best = Math.min(best, deltaE2000(c, { l: 116 * fy - 16, a: 500 * (fx - fy), b: 200 * (fy - fz) }));
+    }
+  }
+  return best;
 }

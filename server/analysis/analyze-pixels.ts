@@ -14,6 +14,8 @@ export type AnalyzeOptions = {
   catalogue: readonly CatalogueInk[];
   stash?: ReadonlySet<number>;
   white?: WhitePoint;
+  /** Read the strips exactly at these outlines (the member's corrections), skipping detection. */
+  outlines?: Outline[];
   /** Overrides for the segmentation constants (for experiments; production uses the defaults). */
   segment?: Partial<SegmentParams>;
   /** The paper white, when already estimated on this same image (estimatePaper(img, white)). */

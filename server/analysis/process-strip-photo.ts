@@ -20,7 +20,7 @@ import {
 import { analyzePixels, estimatePaper, reportPaper } from "./analyze-pixels";
 import { correctToPaperWhite } from "./correct-photo";
 import { toCorrectedLab } from "./corrected-lab";
-import type { AnalysisResult, CatalogueInk, WhitePoint } from "./types";
+import type { AnalysisResult, CatalogueInk, Outline, WhitePoint } from "./types";
 
 /** Long edge of the copy the analysis reads (fast, and plenty for colour bands). */
 export const ANALYSIS_LONG_EDGE = 800;
@@ -31,6 +31,8 @@ export type StripPhotoOptions = {
   stash?: ReadonlySet<number>;
   /** A paper-white point the member tapped, as fractions of the upright photo. */
   white?: WhitePoint;
+  /** Read the strips exactly at these outlines (the member's corrections), skipping detection. */
+  outlines?: Outline[];
   limits?: Pick<ReadImageOptions, "maxBytes" | "maxPixels">;
 };
 

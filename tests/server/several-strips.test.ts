@@ -127,6 +127,12 @@ describe("posting strips from a several-strip photo", () => {
     // Different strips, different pictures: their perceptual hashes differ.
     const hashes = await t.db.selectFrom("strips").select(["phash"]).where("upload_id", "=", id).execute();
     expect(new Set(hashes.map((h) => h.phash)).size).toBe(2);
+    // The upload names the strips posted from it, for the posting page after a reload.
+    const view: Upload = (await mara.get(`/api/uploads/${id}`).expect(200)).body;
+    expect(view.posted).toEqual([
+      { stripIndex: 0, stripId: a.body.id, status: a.body.status },
+      { stripIndex: 2, stripId: c.body.id, status: c.body.status },
+    ]);
     // One upload, and each strip has a folder of its own under it.
     expect(folders(id)).toHaveLength(2);
     expect(originals(id)).toHaveLength(1);
@@ -271,6 +277,7 @@ describe("the member's own outline: POST /api/uploads/:id/outline", () => {
     expect(after.analysis!.strip!.start.y).toBeCloseTo(0.5, 2);
     // The posted strip is now strip 1 of the photo.
     expect((await mara.get(`/api/strips/${posted}`)).body.stripIndex).toBe(1);
+    expect(after.posted).toEqual([{ stripIndex: 1, stripId: posted, status: "published" }]);
     const repost = await post(mara, id, 1, ids(third)).expect(409);
     expect(repost.body.error.code).toBe("already_posted");
 

@@ -129,3 +129,8 @@ export async function renumberPostedAfterRemoval(db: DbOrTx, uploadId: string, r
 export async function saveAnalysis(db: DbOrTx, id: string, analysisJson: string, now: string) {
   await db.updateTable("uploads").set({ analysis_json: analysisJson, updated_at: now }).where("id", "=", id).execute();
 }
+
+/** The strips posted from this upload: number in the analysis, id, status. */
+export function postedStrips(db: DbOrTx, uploadId: string) {
+  return db.selectFrom("strips").select(["strip_index", "id", "status"]).where("upload_id", "=", uploadId).orderBy("strip_index").execute();
+}

@@ -11,7 +11,7 @@ import { AppError, fieldsFromZod, notFound } from "../../middleware/errors";
 import { memberLimit } from "../../middleware/member-limits";
 import { validate } from "../../middleware/validate";
 import type { FileStore } from "../../storage/file-store";
-import { toUpload, type UploadsService } from "./uploads.service";
+import type { UploadsService } from "./uploads.service";
 
 const mimeOf = { jpeg: "image/jpeg", png: "image/png", webp: "image/webp", heif: "image/heic" } as const;
 
@@ -98,7 +98,7 @@ export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore;
 
   router.get("/uploads/:id", validate({ params: uploadIdParams }), async (req, res) => {
     const row = await uploads.get(String(req.params.id), res.locals.user);
-    res.set("Cache-Control", "no-store").json(toUpload(row));
+    res.set("Cache-Control", "no-store").json(await uploads.view(row));
   });
 
   router.post(

@@ -157,6 +157,12 @@ export function createUploadsService(deps: { db: Db; store: FileStore; pool: Upl
     }
   }
 
+  /** The upload as its owner sees it, with the strips already posted from it. */
+  async function view(row: UploadRow): Promise<Upload> {
+    const posted = await repo.postedStrips(db, row.id);
+    return { ...toUpload(row), posted: posted.map((p) => ({ stripIndex: p.strip_index, stripId: p.id, status: p.status })) };
+  }
+
   function enqueue(id: string) {
     const job = process(id)
       .catch((err) => logger.error({ err, uploadId: id }, "upload processing failed"))
@@ -190,6 +196,8 @@ export function createUploadsService(deps: { db: Db; store: FileStore; pool: Upl
       enqueue(id);
       return { id, status: "processing" as const };
     },
+
+    view,
 
     async get(id: string, viewer: Me | null): Promise<UploadRow> {
       const row = await repo.findUpload(db, id);
@@ -245,7 +253,7 @@ export function createUploadsService(deps: { db: Db; store: FileStore; pool: Upl
         reading = { ...found, outline: found.outline, index: input.stripIndex };
       }
       // Written against the photo as it is now: someone may have changed it while the strip was read.
-      return db.transaction().execute(async (tx) => {
+      const saved = await db.transaction().execute(async (tx) => {
         const now = await repo.findUpload(tx, id);
         if (!now) throw notFound("That upload");
         const current = editable(now, await repo.postedStripIndexes(tx, id), input);
@@ -257,8 +265,9 @@ export function createUploadsService(deps: { db: Db; store: FileStore; pool: Upl
         }
         const size = now.width && now.height ? { width: now.width, height: now.height } : null;
         await repo.saveAnalysis(tx, id, JSON.stringify(withStrips(current.analysis, strips, size)), nowIso());
-        return toUpload((await repo.findUpload(tx, id))!);
+        return (await repo.findUpload(tx, id))!;
       });
+      return view(saved);
     },
 
     /** After a crash or restart: re-run unfinished uploads, or fail the ones that keep failing. */

@@ -1,7 +1,9 @@
 import { useState } from "react";
 import { Link, useNavigate } from "react-router";
 import type { Me } from "../../../../shared/schemas/accounts";
-import type { AnalysisBand, InkSuggestion, Upload } from "../../../../shared/schemas/uploads";
+import { stripReadings } from "../../../../shared/schemas/outlines";
+import type { AnalysisBand, InkSuggestion, StripReading, Upload } from "../../../../shared/schemas/uploads";
+import { SegmentedChoice } from "../../../components/ui/segmented-choice";
 import { Button } from "../../../components/ui/button";
 import { Loading } from "../../../components/ui/loading";
 import { Notice } from "../../../components/ui/notice";
@@ -11,8 +13,13 @@ import type { CreatedStrip } from "../api/create-strip";
 import { useUpload } from "../api/get-upload";
 import { useReanalyseUpload } from "../api/reanalyse-upload";
 import { prefillInks, withSuggestion, type InkChoice, type InkColourLookup, type InkPickerSlot } from "../ink-choice";
+import { draftsFollowing, titleFor, withPosted, type StripDraft } from "../strip-drafts";
 import { stripAlt } from "../strip-words";
 import type { WhitePoint } from "./analysed-photo";
+import { AnalysisNotices } from "./analysis-notices";
+import { BatchPostForm, type BatchResult } from "./batch-post-form";
+import { BatchPostedSummary } from "./batch-posted-summary";
+import { StripOutlinesPanel } from "./strip-outlines-panel";
 import { PostBandsSection } from "./post-bands-section";
 import { PostPhotoSection } from "./post-photo-section";
 import { PostedPending } from "./post-posted-pending";
@@ -32,6 +39,11 @@ function isReady(upload: Upload | undefined): upload is ReadyUpload {
   return upload?.status === "ready" && upload.analysis !== undefined && upload.images !== undefined;
 }
 
+/** The photo's strips; an analysis from before several-strip photos is one strip without an outline. */
+const readingsOf = (upload: ReadyUpload | null) => (upload ? stripReadings(upload.analysis) : []);
+
+type PhotoMode = "outlines" | "white";
+
 /** Step two: the analysed photo, the member's ink order and details, and posting. */
 export function UploadStage({ uploadId, me, onStartOver, inkTools }: { uploadId: string; me: Me; onStartOver: () => void; inkTools: PostInkTools }) {
   const navigate = useNavigate();
@@ -45,6 +57,10 @@ export function UploadStage({ uploadId, me, onStartOver, inkTools }: { uploadId:
   // The white point the photo on screen was analysed with (a failed re-run leaves it as it was).
   const [readyWhite, setReadyWhite] = useState<WhitePoint | null>(null);
   const [posted, setPosted] = useState<CreatedStrip | null>(null);
+  // Several strips: one draft each, and what the last "Post N strips" did.
+  const [drafts, setDrafts] = useState<StripDraft[]>([]);
+  const [batchResults, setBatchResults] = useState<BatchResult[] | null>(null);
+  const [mode, setMode] = useState<PhotoMode | null>(null);
 
   // Each fresh "ready" answer replaces the photo and bands; the ink order follows it until the
   // member has changed it.
@@ -52,12 +68,17 @@ export function UploadStage({ uploadId, me, onStartOver, inkTools }: { uploadId:
   if (isReady(data) && data !== lastReady) {
     if (lastReady && inksTouched) setRemeasured(true);
     else setInks(prefillInks(data.analysis.bands));
+    const before = readingsOf(lastReady);
+    // A one-strip photo that gains strips keeps the ink order the member already set for strip 1.
+    const base = before.length === 1 && drafts[0] && inksTouched ? [{ ...drafts[0], inks, inksTouched, title: titleFor(inks) }] : drafts;
+    setDrafts(withPosted(draftsFollowing(before, base, readingsOf(data)), data.posted));
     setLastReady(data);
     setReadyWhite(white);
   }
 
-  const suggestionIds = lastReady ? lastReady.analysis.bands.flatMap((b) => b.suggestions.map((s) => s.inkId)) : [];
-  const inkColour = inkTools.useInkColours([...suggestionIds, ...inks.map((i) => i.id)]);
+  const readings = readingsOf(lastReady);
+  const suggestionIds = readings.flatMap((r) => r.bands.flatMap((b) => b.suggestions.map((s) => s.inkId)));
+  const inkColour = inkTools.useInkColours([...suggestionIds, ...inks.map((i) => i.id), ...drafts.flatMap((d) => d.inks.map((i) => i.id))]);
   const { picker } = inkTools;
 
   function changeInks(next: InkChoice[]) {
@@ -165,20 +186,71 @@ export function UploadStage({ uploadId, me, onStartOver, inkTools }: { uploadId:
       ? "The last analysis did not work, so the strip cannot be posted yet. Tap a clean patch of white paper again, or go back to the automatic paper white."
       : null;
 
+  const several = readings.length > 1;
+  // Outlines can be moved once the analysis gives them (not on photos analysed before outlines).
+  const outlined = readings.every((r) => r.outline !== null) ? (readings as StripReading[]) : null;
+  const photoMode: PhotoMode = outlined ? (mode ?? (several ? "outlines" : "white")) : "white";
+  const busy = processing || reanalyse.isPending;
+  const alt = several ? `Your photo of ${readings.length} blended strips` : stripAlt(inks.map((i) => i.name));
+
+  const photoSection = (
+    <PostPhotoSection
+      upload={lastReady}
+      status={status}
+      errorMessage={data?.error?.message}
+      lostTouch={lostTouch}
+      alt={alt}
+      white={white}
+      readyWhite={readyWhite}
+      onSetWhite={setWhitePoint}
+      busy={busy}
+      onStartOver={onStartOver}
+      above={
+        outlined && (
+          <SegmentedChoice
+            legend="What tapping the photo does"
+            caption="On the photo:"
+            options={[
+              { value: "outlines", label: several ? "Strip outlines" : "Strip outline" },
+              { value: "white", label: "Paper white" },
+            ]}
+            value={photoMode}
+            onChange={setMode}
+          />
+        )
+      }
+      photo={
+        outlined && photoMode === "outlines" ? (
+          <StripOutlinesPanel uploadId={uploadId} images={lastReady.images} alt={alt} strips={outlined} locked={drafts.flatMap((d, i) => (d.posted ? [i] : []))} busy={busy} onChanged={() => setBatchResults(null)} />
+        ) : undefined
+      }
+      below={<AnalysisNotices photo={analysis.notices ?? []} strips={readings} paperMissing={!analysis.paper.found} />}
+    />
+  );
+
+  if (several) {
+    const left = drafts.filter((d) => !d.posted).length;
+    return (
+      <div className="flex flex-col gap-10">
+        {photoSection}
+        {batchResults && <BatchPostedSummary results={batchResults} memberId={me.id} left={left} onAnother={onStartOver} />}
+        <BatchPostForm
+          uploadId={uploadId}
+          strips={readings}
+          drafts={drafts}
+          onDraftsChange={setDrafts}
+          inkColour={inkColour}
+          picker={picker}
+          blockedReason={blockedReason}
+          onPosted={setBatchResults}
+        />
+      </div>
+    );
+  }
+
   return (
     <div className="flex flex-col gap-10">
-      <PostPhotoSection
-        upload={lastReady}
-        status={status}
-        errorMessage={data?.error?.message}
-        lostTouch={lostTouch}
-        alt={stripAlt(inks.map((i) => i.name))}
-        white={white}
-        readyWhite={readyWhite}
-        onSetWhite={setWhitePoint}
-        busy={processing || reanalyse.isPending}
-        onStartOver={onStartOver}
-      />
+      {photoSection}
       <PostBandsSection
         analysis={analysis}
         remeasured={remeasured}

@@ -28,13 +28,11 @@ import { fileURLToPath } from "node:url";
 import { Piscina } from "piscina";
 import pino from "pino";
 import sharp from "sharp";
-import { analyzePixels, estimatePaper, reportPaper } from "../server/analysis/analyze-pixels";
+import { analyzePhoto, measurePhoto, reportPaper } from "../server/analysis/analyze-pixels";
 import { correctToPaperWhite } from "../server/analysis/correct-photo";
-import { toCorrectedLab } from "../server/analysis/corrected-lab";
-import { findStrip } from "../server/analysis/find-strip";
+import { detectScene, findStrips } from "../server/analysis/find-strips";
+import { loadVision } from "../server/analysis/vision";
 import { ANALYSIS_LONG_EDGE, analyzeStripImage } from "../server/analysis/process-strip-photo";
-import { readProfile } from "../server/analysis/read-profile";
-import { segmentProfile } from "../server/analysis/segment-profile";
 import { createApp } from "../server/app";
 import { loadConfig } from "../server/config";
 import { openDatabase } from "../server/db/client";
@@ -129,18 +127,15 @@ async function breakdown(photo: string, catalogue: ReturnType<typeof syntheticCa
   const down = await stage(n, () => downscaleImage(img, ANALYSIS_LONG_EDGE));
   rows.push([`  not used for JPEG: analysis copy scaled from the display photo instead (sharp)`, down.ms]);
   const small = decodeSmall.value;
-  const paper = await stage(n, () => estimatePaper(small));
-  rows.push(["analysis JS: paper white", paper.ms]);
-  const lab = await stage(n, () => toCorrectedLab(small, paper.value));
-  rows.push(["analysis JS:   of which corrected CIELAB image", lab.ms]);
-  const geometry = await stage(n, () => findStrip(lab.value));
-  rows.push(["analysis JS:   of which strip finding", geometry.ms]);
-  const profile = await stage(n, () => readProfile(lab.value, geometry.value));
-  rows.push(["analysis JS:   of which profile reading", profile.ms]);
-  const seg = await stage(n, () => segmentProfile(profile.value.lab, profile.value.n));
-  rows.push(["analysis JS:   of which segmentation (DP)", seg.ms]);
-  const rest = await stage(n, () => analyzePixels(small, { catalogue, paper: paper.value }));
-  rows.push(["analysis JS: everything after paper white (bands, suggestions)", rest.ms]);
+  const scene = await stage(n, () => detectScene(small));
+  rows.push(["analysis JS: photo maps and the card (paper regions)", scene.ms]);
+  const found = await stage(n, () => findStrips(scene.value));
+  rows.push([`analysis JS: finding the strips (${found.value.length})`, found.ms]);
+  const measured = await stage(n, () => measurePhoto(small));
+  rows.push(["analysis JS: all of the above + paper white, straightening and reading every strip, segmentation", measured.ms]);
+  const whole = await stage(n, () => analyzePhoto(small, { catalogue }));
+  rows.push(["analysis JS: the whole analysis (+ ink suggestions)", whole.ms]);
+  const paper = { value: whole.value.paper };
   const shown = await stage(n, () => correctToPaperWhite(img, reportPaper(paper.value).lab));
   rows.push([`display photo corrected to the paper white (JS, ${img.width} × ${img.height})`, shown.ms]);
   for (const effort of [0, 1, 2, 4]) {
@@ -160,6 +155,7 @@ async function breakdown(photo: string, catalogue: ReturnType<typeof syntheticCa
 }
 
 async function main() {
+  await loadVision();
   const dir = await mkdtemp(join(tmpdir(), "blendwell-bench-"));
   try {
     // A 4000 × 3000 photo (12 MP) of a four-ink strip, warm cast, noise, vignetting, JPEG q 90.

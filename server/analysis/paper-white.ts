@@ -30,7 +30,7 @@ const MIN_BORDER_PAPER = 0.3; // share of the image border that must be paper â€
 const MIN_TOTAL_PAPER = 0.25; // â€¦ or share of the whole image
 // Largest spread of Bradford cone gains (max/min) a detected paper may need. CIE illuminant A
 // (incandescent) needs about 4.05; a saturated yellow ink would need 6 or more.
-const MAX_CONE_GAIN_RATIO = 5;
+export const MAX_CONE_GAIN_RATIO = 5;
 
 const Y_ROW = [SRGB_TO_XYZ[3], SRGB_TO_XYZ[4], SRGB_TO_XYZ[5]];
 
@@ -261,7 +261,7 @@ function fitField(s: Samples, paper: Int32Array): { field: PaperField; kept: Int
 }
 
 /** max/min of the Bradford cone gains that take this white to D65. */
-function coneGainRatio(whiteLinear: [number, number, number]): number {
+export function coneGainRatio(whiteLinear: [number, number, number]): number {
   const xyz = mulVec3(SRGB_TO_XYZ, whiteLinear);
   const s = mulVec3(BRADFORD, xyz.map((v) => v / Math.max(1e-9, xyz[1])));
   const d = mulVec3(BRADFORD, D65_WHITE);
@@ -385,4 +385,39 @@ export function findPaperWhite(img: RgbImage, white?: WhitePoint): PaperEstimate
 /** The photographed paper colour as 8-bit sRGB. */
 export function paperSrgb8(p: PaperEstimate): [number, number, number] {
   return p.measuredLinear.map((v) => Math.max(0, Math.min(255, Math.round(srgbEncode(Math.max(0, v)) * 255)))) as [number, number, number];
+}
+
+/**
+ * The paper white measured on the pixels of a known paper region (the card the strip lies on),
+ * with the brightness field fitted to them. Null when the region's colour would need an
+ * implausible correction (then it is not white paper; see MAX_CONE_GAIN_RATIO).
+ */
+export function paperFromRegion(img: RgbImage, isPaper: (x: number, y: number) => boolean): PaperEstimate | null {
+  const s = takeSamples(img);
+  const { width: w, height: h } = img;
+  const idx = select(s.n, (i) => !s.clipped[i] && isPaper(Math.round((s.x[i] + 0.5) * w), Math.round((s.y[i] + 0.5) * h)));
+  if (idx.length < 20) return null;
+  const { field, kept } = fitField(s, idx);
+  const nr = new Float64Array(kept.length);
+  const ng = new Float64Array(kept.length);
+  const nb = new Float64Array(kept.length);
+  kept.forEach((p, i) => {
+    const f = Math.max(1e-6, evaluateField(field, s.x[p], s.y[p]));
+    nr[i] = s.r[p] / f;
+    ng[i] = s.g[p] / f;
+    nb[i] = s.b[p] / f;
+  });
+  const normalised: [number, number, number] = [quantileOf(nr, 0.5), quantileOf(ng, 0.5), quantileOf(nb, 0.5)];
+  if (coneGainRatio(normalised) > MAX_CONE_GAIN_RATIO) return null;
+  const measured: [number, number, number] = [quantileOf(s.r, 0.5, kept), quantileOf(s.g, 0.5, kept), quantileOf(s.b, 0.5, kept)];
+  return { found: true, measuredLinear: measured, field, correction: correctionFor(normalised), paperSamples: kept.length };
+}
+
+/** The paper white from one measured colour (a strip's own un-inked margin): a flat field at its brightness. */
+export function paperFromColour(linear: [number, number, number]): PaperEstimate | null {
+  const lum = Y_ROW[0] * linear[0] + Y_ROW[1] * linear[1] + Y_ROW[2] * linear[2];
+  if (!(lum > 1e-4)) return null;
+  const normalised: [number, number, number] = [linear[0] / lum, linear[1] / lum, linear[2] / lum];
+  if (coneGainRatio(normalised) > MAX_CONE_GAIN_RATIO) return null;
+  return { found: true, measuredLinear: linear, field: { coefficients: [lum] }, correction: correctionFor(normalised), paperSamples: 0 };
 }

@@ -17,10 +17,10 @@ import {
   type DerivativeInfo,
   type ReadImageOptions,
 } from "../images/index";
-import { analyzePixels, estimatePaper, reportPaper } from "./analyze-pixels";
+import { analyzePhoto } from "./analyze-pixels";
 import { correctToPaperWhite } from "./correct-photo";
-import { toCorrectedLab } from "./corrected-lab";
 import type { AnalysisResult, CatalogueInk, Outline, WhitePoint } from "./types";
+import { loadVision } from "./vision";
 
 /** Long edge of the copy the analysis reads (fast, and plenty for colour bands). */
 export const ANALYSIS_LONG_EDGE = 800;
@@ -31,8 +31,8 @@ export type StripPhotoOptions = {
   stash?: ReadonlySet<number>;
   /** A paper-white point the member tapped, as fractions of the upright photo. */
   white?: WhitePoint;
-  /** Read the strips exactly at these outlines (the member's corrections), skipping detection. */
-  outlines?: Outline[];
+  /** The member's own strip outlines: read exactly there instead of finding the strips. */
+  outlines?: readonly Outline[];
   limits?: Pick<ReadImageOptions, "maxBytes" | "maxPixels">;
 };
 
@@ -40,13 +40,11 @@ export type StripPhotoOptions = {
 export type StripPhotoTimings = {
   /** Read and check the file, decode the 800 px analysis copy (upright sRGB). */
   decodeMs: number;
-  /** Paper-white estimate (and the analysis's CIELAB image, if the display photo is still decoding). */
-  paperMs: number;
   /** Waiting for the 1600 px display decode after the paper white was known. */
   displayWaitMs: number;
   /** Display photo corrected to the paper white (this thread). */
   correctMs: number;
-  /** The rest of the analysis, while the derivatives encode on libvips' threads. */
+  /** Finding the strips, the paper white, reading and matching every strip (this thread). */
   analysisMs: number;
   /** From the start until bands and suggestions are known. */
   analysisReadyMs: number;
@@ -91,8 +89,9 @@ async function decode(path: string, opts: StripPhotoOptions, display: boolean): 
  * upload runs. Throws ImageError or NoStripError for member mistakes, RangeError for a bad white point.
  */
 export async function analyzeStripImage(path: string, opts: StripPhotoOptions): Promise<AnalysisResult> {
+  await loadVision();
   const { small } = await decode(path, opts, false);
-  return analyzePixels(small, { catalogue: opts.catalogue, stash: opts.stash, white: opts.white });
+  return analyzePhoto(small, { catalogue: opts.catalogue, stash: opts.stash, white: opts.white, outlines: opts.outlines }).result;
 }
 
 /**
@@ -105,35 +104,36 @@ export async function processStripPhoto(
   out: { displayPath: string; thumbPath: string },
   opts: StripPhotoOptions,
 ): Promise<ProcessedStripPhoto> {
+  await loadVision();
   const start = performance.now();
   const { small, display } = await decode(path, opts, true);
-  let displayDecoded = false;
-  display!.then(() => (displayDecoded = true)).catch(() => undefined);
+  display!.catch(() => undefined);
   const decodeMs = performance.now() - start;
   let t = performance.now();
-  const paper = estimatePaper(small, opts.white);
-  const reported = reportPaper(paper);
-  // While the display photo is still decoding, this thread makes the analysis's CIELAB image.
-  const lab = displayDecoded ? undefined : toCorrectedLab(small, paper);
-  const paperMs = performance.now() - t;
+  // The analysis runs on this thread while libvips decodes the display photo on its own threads.
+  let analysis: AnalysisResult;
+  let reported: AnalysisResult["paper"];
+  let paperFound: boolean;
+  try {
+    const done = analyzePhoto(small, { catalogue: opts.catalogue, stash: opts.stash, white: opts.white, outlines: opts.outlines });
+    analysis = done.result;
+    reported = analysis.paper;
+    paperFound = done.paper.found;
+  } catch (err) {
+    await display!.catch(() => undefined);
+    throw err;
+  }
+  const analysisDone = performance.now();
+  const analysisMs = analysisDone - t;
   t = performance.now();
   const img = await display!;
   const displayWaitMs = performance.now() - t;
   t = performance.now();
   // Members see the corrected photo; without a paper white there is nothing to correct against.
-  const shown = paper.found ? correctToPaperWhite(img, reported.lab) : img;
+  const shown = paperFound ? correctToPaperWhite(img, reported.lab) : img;
   const correctMs = performance.now() - t;
+  const encodeStart = performance.now();
   const encoding = makeDerivatives(shown);
-  t = performance.now();
-  let analysis: AnalysisResult;
-  try {
-    analysis = analyzePixels(small, { catalogue: opts.catalogue, stash: opts.stash, white: opts.white, paper, lab });
-  } catch (err) {
-    await encoding.catch(() => undefined);
-    throw err;
-  }
-  const analysisDone = performance.now();
-  const analysisMs = analysisDone - t;
   const encoded = await encoding;
   const encodedAt = performance.now();
   await Promise.all([mkdir(dirname(out.displayPath), { recursive: true }), mkdir(dirname(out.thumbPath), { recursive: true })]);
@@ -144,12 +144,11 @@ export async function processStripPhoto(
     derivatives,
     timings: {
       decodeMs,
-      paperMs,
       displayWaitMs,
       correctMs,
       analysisMs,
       analysisReadyMs: analysisDone - start,
-      derivativesWaitMs: encodedAt - analysisDone,
+      derivativesWaitMs: encodedAt - encodeStart,
       writeMs: end - encodedAt,
       totalMs: end - start,
     },

@@ -9,6 +9,7 @@ import {
   analyzePixels,
   analyzeStripImage,
   confidenceFor,
+  loadVision,
   processStripPhoto,
   segmentProfile,
   suggestInks,
@@ -23,6 +24,7 @@ import { renderScene, sceneToJpeg, seededRandom, syntheticCatalogue, type SceneS
 
 let dir: string;
 beforeAll(async () => {
+  await loadVision();
   dir = await mkdtemp(join(tmpdir(), "blendwell-analysis-"));
 });
 afterAll(async () => {
@@ -197,7 +199,12 @@ describe("analyzeStripImage", () => {
     const path = join(dir, "three.jpg");
     await writeFile(path, await sceneToJpeg(renderScene(scene()), 85));
     const r = await analyzeStripImage(path, { catalogue });
-    expect(Object.keys(r).sort()).toEqual(["bands", "orientation", "paper", "strip", "transitions"]);
+    expect(Object.keys(r).sort()).toEqual(["bands", "notices", "orientation", "paper", "strip", "strips", "transitions"]);
+    // strips[0] is the same strip as the single-strip fields, with its four corners.
+    expect(r.strips).toHaveLength(1);
+    expect(r.strips[0].bands).toEqual(r.bands);
+    expect(r.strips[0].outline).toHaveLength(4);
+    expect(r.notices).toEqual([]);
     expect(r.orientation).toBe("horizontal");
     expect(Object.keys(r.strip!).sort()).toEqual(["end", "start", "thickness"]);
     expect(r.strip!.start.x).toBeLessThan(r.strip!.end.x);

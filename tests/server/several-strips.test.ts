@@ -47,7 +47,7 @@ async function threeStripUpload(agent: Agent) {
   const { body } = await agent.post("/api/uploads").attach("image", photo.jpeg, "three.jpg").expect(202);
   await t.services.uploads.idle();
   expect((await agent.get(`/api/uploads/${body.id}`)).body.status).toBe("ready");
-  const readings = readingsOf(photo.tiles, photo.outlines, await loadCatalogue(t.db));
+  const readings = await readingsOf(photo.tiles, photo.outlines, await loadCatalogue(t.db));
   // The analysis reads each strip on its own: 3, 2 and 4 bands (the generator's truth).
   expect(readings.map((r) => r.bands.length)).toEqual([3, 2, 4]);
   await giveStrips(t.db, body.id, readings);
@@ -262,7 +262,8 @@ describe("the member's own outline: POST /api/uploads/:id/outline", () => {
   it("removes a strip and renumbers the rest (posted strips too); refuses to change a posted strip or remove the last one", async () => {
     const { id, readings } = await threeStripUpload(mara);
     const third = inkSets()[2]!;
-    const posted = (await post(mara, id, 2, ids(third)).expect(201)).body.id as number;
+    const postedRes = (await post(mara, id, 2, ids(third)).expect(201)).body as { id: number; status: string };
+    const posted = postedRes.id;
 
     const locked = await send(mara, id, { stripIndex: 2, outline: readings[2]!.outline }).expect(409);
     expect(locked.body.error.message).toBe("Strip 3 is already posted, so its outline cannot change. Delete the posted strip first if it is wrong.");
@@ -277,7 +278,7 @@ describe("the member's own outline: POST /api/uploads/:id/outline", () => {
     expect(after.analysis!.strip!.start.y).toBeCloseTo(0.5, 2);
     // The posted strip is now strip 1 of the photo.
     expect((await mara.get(`/api/strips/${posted}`)).body.stripIndex).toBe(1);
-    expect(after.posted).toEqual([{ stripIndex: 1, stripId: posted, status: "published" }]);
+    expect(after.posted).toEqual([{ stripIndex: 1, stripId: posted, status: postedRes.status }]);
     const repost = await post(mara, id, 1, ids(third)).expect(409);
     expect(repost.body.error.code).toBe("already_posted");
 

@@ -2,7 +2,7 @@ import sharp from "sharp";
 import type { Ink } from "../../shared/schemas/inks";
 import { centreLineOf } from "../../shared/schemas/outlines";
 import type { Analysis, Outline, StripReading } from "../../shared/schemas/uploads";
-import { analyzePixels, type CatalogueInk } from "../../server/analysis";
+import { analyzePixels, loadVision, type CatalogueInk } from "../../server/analysis";
 import type { Db } from "../../server/db/client";
 import { renderScene, type Scene, type SceneSpec } from "../../server/demo/synthetic-photo";
 
@@ -58,7 +58,9 @@ export async function severalStripsPhoto(inkSets: Pick<Ink, "id" | "lab">[][], s
 }
 
 /** Each tile read by the real analysis on its own, placed at its true outline in the photo. */
-export function readingsOf(tiles: Scene[], outlines: Outline[], catalogue: CatalogueInk[]): StripReading[] {
+export async function readingsOf(tiles: Scene[], outlines: Outline[], catalogue: CatalogueInk[]): Promise<StripReading[]> {
+  // The analysis finds strips with OpenCV (WebAssembly), loaded once per thread.
+  await loadVision();
   return tiles.map((tile, index) => {
     const a = analyzePixels({ width: tile.width, height: tile.height, data: tile.data }, { catalogue });
     return { index, outline: outlines[index]!, orientation: a.orientation, bands: a.bands, transitions: a.transitions, notices: [] };

@@ -57,6 +57,8 @@ export function StripOutlinesPanel({ uploadId, images, alt, strips, locked = [],
           setTrouble(null);
           setEdits((old) => {
             if (req.action.kind !== "read") return {};
+            // Keep a corner the member has moved again since this was sent (its own reading is queued).
+            if (old[req.stripIndex] !== req.outline) return old;
             const rest = { ...old };
             delete rest[req.stripIndex];
             return rest;

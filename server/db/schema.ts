@@ -121,6 +121,16 @@ export interface StripTable {
   /** Held out of public view until a moderator decides: "reports" or "duplicate". */
   hold: "reports" | "duplicate" | null;
   duplicate_of: number | null;
+  /** Which strip of its upload's analysis this is (unique per upload). */
+  strip_index: Generated<number>;
+  /** A strip cut from a several-strip photo has images of its own; null: the upload's. */
+  display_key: string | null;
+  thumb_key: string | null;
+  placeholder: string | null;
+  width: number | null;
+  height: number | null;
+  /** The strip's corners as fractions of its own display image (JSON Outline), when known. */
+  outline_json: string | null;
 }
 
 export interface StripInkTable {

@@ -74,6 +74,7 @@ export async function seedDemoStrips(deps: { db: Db; services: Services; logger:
     const inkIds = idea.inks.map((ref) => inks.find((k) => k.slug === ref.brand && k.name === ref.name)!.id);
     const { id } = await services.strips.create(me, {
       uploadId: u.uploadId,
+      stripIndex: 0,
       title: idea.title,
       notes: idea.notes,
       paper: idea.paper,

@@ -27,3 +27,4 @@ export {
   type EncodedImage,
 } from "./derivatives";
 export { useSafeSharp, ALLOWED_LOADERS } from "./safe-sharp";
+export { cropDerivatives, type PixelBox } from "./crop";

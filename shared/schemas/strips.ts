@@ -1,5 +1,7 @@
 import { z } from "zod";
 import { idParam, plainText, type LabValue } from "./common";
+import { MAX_STRIPS } from "./outlines";
+import type { Outline } from "./uploads";
 
 export const papers = ["smooth-cardstock", "hot-press", "cold-press", "mixed-media", "other"] as const;
 export const paperLabels: Record<(typeof papers)[number], string> = {
@@ -62,7 +64,17 @@ const stripFields = {
   inks: inkOrder,
 };
 
-export const stripInput = z.strictObject({ uploadId: z.string().uuid("is not an upload id"), ...stripFields });
+export const stripInput = z.strictObject({
+  uploadId: z.string().uuid("is not an upload id"),
+  /** Which strip of the photo (analysis.strips[stripIndex]); a one-strip photo has only 0. */
+  stripIndex: z
+    .number({ error: "must be a number" })
+    .int("must be a whole number")
+    .min(0, "must be 0 or more")
+    .max(MAX_STRIPS - 1, `a photo holds at most ${MAX_STRIPS} strips`)
+    .default(0),
+  ...stripFields,
+});
 export type StripInput = z.input<typeof stripInput>;
 
 export const stripPatch = z
@@ -120,6 +132,10 @@ export type Strip = {
   inks: StripInk[];
   bands: StripBand[];
   orientation: "horizontal" | "vertical";
+  /** Which strip of its photo this is (0 for a one-strip photo). */
+  stripIndex: number;
+  /** The strip's corners as fractions of its own display image (see Outline), when known. */
+  outline: Outline | null;
   images: StripImages;
   paper: (typeof papers)[number];
   tools: (typeof tools)[number][];

@@ -67,6 +67,8 @@ export type Upload = {
   error?: { code: string; message: string };
   analysis?: Analysis;
   images?: UploadImages;
+  /** Strips already posted from this photo (its owner and moderators see them): their number in `strips` and their id. */
+  posted?: { stripIndex: number; stripId: number; status: "pending" | "published" | "hidden" | "returned" | "rejected" }[];
   createdAt: string;
 };
 

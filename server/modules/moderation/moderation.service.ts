@@ -20,7 +20,7 @@ import type { Database, StripRow } from "../../db/schema";
 import type { ExpressionBuilder } from "kysely";
 import { AppError, notFound } from "../../middleware/errors";
 import * as stripsRepo from "../strips/strips.repository";
-import { hydrate, isSuspended, tagBands } from "../strips/strips.service";
+import { bandsOf, hydrate, isSuspended, tagBands } from "../strips/strips.service";
 import { notify } from "./notify";
 
 type Decision = z.output<typeof decisionInput>;
@@ -183,7 +183,7 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
         const upload = await tx.selectFrom("uploads").select("analysis_json").where("id", "=", row.upload_id).executeTakeFirst();
         if (upload?.analysis_json) {
           const ordered = input.inks.map((id) => inks.find((i) => i.id === id)!);
-          await stripsRepo.replaceBands(tx, stripId, tagBands(JSON.parse(upload.analysis_json) as Analysis, ordered));
+          await stripsRepo.replaceBands(tx, stripId, tagBands(bandsOf(JSON.parse(upload.analysis_json) as Analysis, row.strip_index), ordered));
         }
         await stripsRepo.updateStrip(tx, stripId, { ink_count: input.inks.length, version: row.version + 1, updated_at: nowIso() });
         const names = input.inks.map((id) => inks.find((i) => i.id === id)!.name).join(", ");
@@ -266,7 +266,7 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
           reports: own.map((r) => ({ reason: r.reason, note: r.note, createdAt: r.created_at })),
           duplicates,
           farBands: strip.bands.filter((b) => (b.deltaE ?? 0) > FAR_BAND_DE).map((b) => b.index),
-          suggestions: parsed ? parsed.bands.map((b) => ({ bandIndex: b.index, inks: b.suggestions.slice(0, 3) })) : [],
+          suggestions: parsed ? bandsOf(parsed, row.strip_index).map((b) => ({ bandIndex: b.index, inks: b.suggestions.slice(0, 3) })) : [],
         });
       }
       return items;

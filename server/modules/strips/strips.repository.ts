@@ -6,8 +6,23 @@ export function findStrip(db: DbOrTx, id: number) {
   return db.selectFrom("strips").selectAll().where("id", "=", id).executeTakeFirst();
 }
 
-export function findStripByUpload(db: DbOrTx, uploadId: string) {
-  return db.selectFrom("strips").select(["id"]).where("upload_id", "=", uploadId).executeTakeFirst();
+/** The strip posted from this strip of an upload, if any. */
+export function findStripByUpload(db: DbOrTx, uploadId: string, stripIndex: number) {
+  return db.selectFrom("strips").select(["id"]).where("upload_id", "=", uploadId).where("strip_index", "=", stripIndex).executeTakeFirst();
+}
+
+/** Which strips of an upload are posted (their strip_index), lowest first. */
+export async function postedStripIndexes(db: DbOrTx, uploadId: string): Promise<number[]> {
+  const rows = await db.selectFrom("strips").select("strip_index").where("upload_id", "=", uploadId).orderBy("strip_index").execute();
+  return rows.map((r) => r.strip_index);
+}
+
+export function findUploadOf(db: DbOrTx, uploadId: string) {
+  return db.selectFrom("uploads").selectAll().where("id", "=", uploadId).executeTakeFirst();
+}
+
+export async function deleteUploadRow(db: DbOrTx, uploadId: string) {
+  await db.deleteFrom("uploads").where("id", "=", uploadId).execute();
 }
 
 export async function insertStrip(db: DbOrTx, row: Omit<StripRow, "id" | "version" | "saves">) {

@@ -1,4 +1,4 @@
-import type { Analysis } from "../../../shared/schemas/uploads";
+import type { Analysis, Outline } from "../../../shared/schemas/uploads";
 import type { StripPhotoTimings } from "../../analysis/process-strip-photo";
 
 export type CatalogueEntry = { id: number; name: string; brand: string; hex: string; lab: { l: number; a: number; b: number } };
@@ -23,3 +23,18 @@ export type UploadJobResult =
       timings: StripPhotoTimings;
     }
   | { ok: false; code: string; message: string };
+
+/**
+ * A member's corrected outline: read the strips exactly there (no detection, no new photo files),
+ * with the paper white the upload was analysed with.
+ */
+export type OutlineJob = {
+  kind: "outline";
+  originalPath: string;
+  catalogue: CatalogueEntry[];
+  stash: number[];
+  white?: { x: number; y: number };
+  outlines: Outline[];
+};
+
+export type OutlineJobResult = { ok: true; analysis: Analysis } | { ok: false; code: string; message: string };

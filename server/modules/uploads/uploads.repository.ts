@@ -100,3 +100,37 @@ export function listStaleDrafts(db: DbOrTx, cutoff: string) {
 export async function deleteUpload(db: DbOrTx, id: string) {
   await db.deleteFrom("uploads").where("id", "=", id).execute();
 }
+
+/** Which strips of this upload are posted (strip_index), lowest first. */
+export async function postedStripIndexes(db: DbOrTx, uploadId: string): Promise<number[]> {
+  const rows = await db.selectFrom("strips").select("strip_index").where("upload_id", "=", uploadId).orderBy("strip_index").execute();
+  return rows.map((r) => r.strip_index);
+}
+
+/** After strip `removed` is taken out of the analysis, posted strips after it move up one. */
+export async function renumberPostedAfterRemoval(db: DbOrTx, uploadId: string, removed: number) {
+  // Through a parking range far above any strip number (a photo holds at most a dozen), so
+  // unique (upload_id, strip_index) and strip_index >= 0 hold after every row.
+  const PARK = 1_000_000;
+  await db
+    .updateTable("strips")
+    .set((eb) => ({ strip_index: eb("strip_index", "+", PARK) }))
+    .where("upload_id", "=", uploadId)
+    .where("strip_index", ">", removed)
+    .execute();
+  await db
+    .updateTable("strips")
+    .set((eb) => ({ strip_index: eb("strip_index", "-", PARK + 1) }))
+    .where("upload_id", "=", uploadId)
+    .where("strip_index", ">=", PARK)
+    .execute();
+}
+
+export async function saveAnalysis(db: DbOrTx, id: string, analysisJson: string, now: string) {
+  await db.updateTable("uploads").set({ analysis_json: analysisJson, updated_at: now }).where("id", "=", id).execute();
+}
+
+/** The strips posted from this upload: number in the analysis, id, status. */
+export function postedStrips(db: DbOrTx, uploadId: string) {
+  return db.selectFrom("strips").select(["strip_index", "id", "status"]).where("upload_id", "=", uploadId).orderBy("strip_index").execute();
+}

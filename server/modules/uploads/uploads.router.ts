@@ -3,6 +3,7 @@ import { mkdirSync } from "node:fs";
 import { open } from "node:fs/promises";
 import { Router } from "express";
 import multer from "multer";
+import { outlineCorrectionInput } from "../../../shared/schemas/outlines";
 import { reanalyseInput, uploadFields, uploadIdParams } from "../../../shared/schemas/uploads";
 import { requireUser } from "../../auth/current-user";
 import { DEFAULT_MAX_BYTES, DEFAULT_MAX_PIXELS, ImageError, readHeaderInfo, sniffImageBytes } from "../../images";
@@ -10,7 +11,7 @@ import { AppError, fieldsFromZod, notFound } from "../../middleware/errors";
 import { memberLimit } from "../../middleware/member-limits";
 import { validate } from "../../middleware/validate";
 import type { FileStore } from "../../storage/file-store";
-import { toUpload, type UploadsService } from "./uploads.service";
+import type { UploadsService } from "./uploads.service";
 
 const mimeOf = { jpeg: "image/jpeg", png: "image/png", webp: "image/webp", heif: "image/heic" } as const;
 
@@ -97,7 +98,7 @@ export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore;
 
   router.get("/uploads/:id", validate({ params: uploadIdParams }), async (req, res) => {
     const row = await uploads.get(String(req.params.id), res.locals.user);
-    res.set("Cache-Control", "no-store").json(toUpload(row));
+    res.set("Cache-Control", "no-store").json(await uploads.view(row));
   });
 
   router.post(
@@ -112,6 +113,19 @@ export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore;
       res.status(202).json(await uploads.reanalyse(String(req.params.id), res.locals.user!, req.body.white));
     },
   );
+
+  router.post("/uploads/:id/outline", requireUser, validate({ params: uploadIdParams }), async (req, res) => {
+    if (!req.is("application/json")) throw new AppError("unsupported_media_type", "Send the request body as application/json.", 415);
+    const parsed = outlineCorrectionInput.safeParse(req.body);
+    if (!parsed.success) {
+      const fields = fieldsFromZod(parsed.error);
+      // Name the first thing wrong in the message itself: "the outline: the four corners must…".
+      const [where, problems] = Object.entries(fields)[0]!;
+      const what = where.startsWith("outline") ? "The outline is not right" : where === "stripIndex" ? "The strip number is not right" : "Some fields are not right";
+      throw new AppError("invalid_outline", `${what}: ${problems[0]}.`, 400, fields);
+    }
+    res.set("Cache-Control", "no-store").json(await uploads.correctOutline(String(req.params.id), res.locals.user!, parsed.data));
+  });
 
   router.get("/uploads/:id/images/:variant", async (req, res) => {
     const parsed = uploadIdParams.safeParse({ id: req.params.id });

@@ -80,7 +80,7 @@ export function createApp(deps: AppDeps) {
   const api = express.Router();
   api.use(express.json({ limit: "100kb", strict: true }));
   api.use(sameOrigin(config.appUrl));
-  api.use(loadCurrentUser(db, authConfig));
+  api.use(loadCurrentUser(db, authConfig, { demoAllowed: config.demo }));
   api.get("/health", (_req, res) => {
     res.json({ ok: true });
   });
@@ -93,7 +93,7 @@ export function createApp(deps: AppDeps) {
   api.use(bindersRouter(deps.services.binders));
   api.use(stashRouter(deps.services.stash));
   api.use(lookAlikesRouter(db, { stashOf: async (userId) => new Set(await stashInkIds(db, userId)) }));
-  if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
+  if (config.demo) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);
   app.use("/api", api);
 

@@ -2,6 +2,7 @@ import type { Server } from "node:http";
 import type { RequestHandler } from "express";
 import pino from "pino";
 import { createApp } from "./app";
+import { forgetOldSessions } from "./auth/sessions";
 import type { AppConfig } from "./config";
 import { openDatabase } from "./db/client";
 import { migrateToLatest } from "./db/migrate";
@@ -20,6 +21,8 @@ export async function boot(
   opts: { seedIfEmpty?: boolean; clientMiddleware?: RequestHandler } = {},
 ): Promise<Running> {
   const logger = pino({ level: config.logLevel });
+  if (config.demo) logger.warn("demo mode is on: demo accounts can sign in and mail stays on this machine");
+  if (config.demoRefused) logger.warn("DEMO_MODE is ignored under NODE_ENV=production: no demo accounts, no mail viewer");
   const db = openDatabase(config.dbFile);
   await migrateToLatest(db);
 
@@ -42,6 +45,8 @@ export async function boot(
   const cleanup = async () => {
     const removed = await services.uploads.cleanupDrafts();
     if (removed) logger.info({ removed }, "old drafts removed");
+    const sessions = await forgetOldSessions(db);
+    if (sessions) logger.info({ sessions }, "old session rows removed");
   };
   if (seeding) {
     console.log("Posting the demo strips through the real analysis (first start only, under a minute)…");

@@ -21,6 +21,7 @@ import type { ExpressionBuilder } from "kysely";
 import { AppError, notFound } from "../../middleware/errors";
 import * as stripsRepo from "../strips/strips.repository";
 import { hydrate, isSuspended, tagBands } from "../strips/strips.service";
+import { endSessionsOf } from "../../auth/sessions";
 import { notify } from "./notify";
 
 type Decision = z.output<typeof decisionInput>;
@@ -290,6 +291,8 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
         if (profile.role !== "member" && mod.role !== "admin") throw new AppError("forbidden", "Only an admin can suspend a moderator or an admin.", 403);
         const until = input.days === 0 ? null : new Date(Date.now() + input.days * 24 * 60 * 60 * 1000).toISOString();
         await tx.updateTable("profiles").set({ suspended_until: until, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
+        // A suspension ends the member's sessions (ASVS 5.0 V7.4.2); signing in again gives a read-only account.
+        if (until) await endSessionsOf(tx, memberId, "suspended");
         await audit(tx, { moderatorId: mod.id, action: until ? "suspend" : "lift suspension", memberId, reason: input.reason, before: profile.suspended_until, after: until });
         await notify(
           tx,
@@ -309,6 +312,8 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
         const profile = await tx.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
         if (!profile) throw notFound("That member");
         await tx.updateTable("profiles").set({ role: input.role, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
+        // Sessions begun under the old role end with it.
+        await endSessionsOf(tx, memberId, "role changed");
         await audit(tx, { moderatorId: admin.id, action: "change role", memberId, reason: input.reason, before: profile.role, after: input.role });
         return { id: memberId, role: input.role };
       });

@@ -13,6 +13,7 @@ import type { Mailer } from "./mail/mailer";
 import { apiNotFound, errorHandler } from "./middleware/errors";
 import { signInLimits } from "./middleware/rate-limits";
 import { sameOrigin } from "./middleware/same-origin";
+import { refuseWritesWhileSuspended } from "./middleware/suspension";
 import { accountsRouter } from "./modules/accounts/accounts.router";
 import { devMailRouter } from "./modules/dev/dev-mail.router";
 import { inksRouter } from "./modules/inks/inks.router";
@@ -81,6 +82,7 @@ export function createApp(deps: AppDeps) {
   api.use(express.json({ limit: "100kb", strict: true }));
   api.use(sameOrigin(config.appUrl));
   api.use(loadCurrentUser(db, authConfig, { demoAllowed: config.demo }));
+  api.use(refuseWritesWhileSuspended(db));
   api.get("/health", (_req, res) => {
     res.json({ ok: true });
   });

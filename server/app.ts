@@ -10,7 +10,7 @@ import { loadCurrentUser } from "./auth/current-user";
 import type { AppConfig } from "./config";
 import type { Db } from "./db/client";
 import type { Mailer } from "./mail/mailer";
-import { apiNotFound, errorHandler } from "./middleware/errors";
+import { apiNotFound, AppError, errorHandler, refuseInvalidUtf8 } from "./middleware/errors";
 import { signInLimits } from "./middleware/rate-limits";
 import { sameOrigin } from "./middleware/same-origin";
 import { refuseWritesWhileSuspended } from "./middleware/suspension";
@@ -76,10 +76,18 @@ export function createApp(deps: AppDeps) {
   const limits = signInLimits(config.rateLimits);
   app.post("/auth/callback/credentials", ...limits.passwords);
   app.post("/auth/signin/nodemailer", ...limits.mail);
+  // Auth.js's own body parsing takes JSON too, and some shapes of it crash inside Auth.js (a 500);
+  // every form we post to it is URL-encoded, so nothing else gets there.
+  app.post("/auth/{*action}", (req, _res, next) => {
+    if (!req.is("application/x-www-form-urlencoded")) {
+      throw new AppError("unsupported_media_type", "Send sign-in forms as application/x-www-form-urlencoded.", 415);
+    }
+    next();
+  });
   app.use("/auth", ExpressAuth(authConfig));
 
   const api = express.Router();
-  api.use(express.json({ limit: "100kb", strict: true }));
+  api.use(express.json({ limit: "100kb", strict: true, verify: refuseInvalidUtf8 }));
   api.use(sameOrigin(config.appUrl));
   api.use(loadCurrentUser(db, authConfig, { demoAllowed: config.demo }));
   api.use(refuseWritesWhileSuspended(db));

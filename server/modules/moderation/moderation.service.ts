@@ -21,6 +21,7 @@ import type { ExpressionBuilder } from "kysely";
 import { AppError, notFound } from "../../middleware/errors";
 import * as stripsRepo from "../strips/strips.repository";
 import { hydrate, isSuspended, tagBands } from "../strips/strips.service";
+import { assertMayActOn } from "../../auth/role-rules";
 import { endSessionsOf } from "../../auth/sessions";
 import { notify } from "./notify";
 
@@ -277,6 +278,7 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
       return db.transaction().execute(async (tx) => {
         const profile = await tx.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
         if (!profile) throw notFound("That member");
+        assertMayActOn(mod, { id: memberId, role: profile.role }, "set standing");
         await tx.updateTable("profiles").set({ standing: input.standing, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
         await audit(tx, { moderatorId: mod.id, action: input.standing === "trusted" ? "trust" : "untrust", memberId, reason: input.reason, before: profile.standing, after: input.standing });
         return { id: memberId, standing: input.standing };
@@ -284,11 +286,10 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
     },
 
     async suspend(mod: Me, memberId: string, input: z.output<typeof suspensionInput>) {
-      if (memberId === mod.id) throw new AppError("self", "You cannot suspend yourself.", 422);
       return db.transaction().execute(async (tx) => {
         const profile = await tx.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
         if (!profile) throw notFound("That member");
-        if (profile.role !== "member" && mod.role !== "admin") throw new AppError("forbidden", "Only an admin can suspend a moderator or an admin.", 403);
+        assertMayActOn(mod, { id: memberId, role: profile.role }, "suspend");
         const until = input.days === 0 ? null : new Date(Date.now() + input.days * 24 * 60 * 60 * 1000).toISOString();
         await tx.updateTable("profiles").set({ suspended_until: until, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
         // A suspension ends the member's sessions (ASVS 5.0 V7.4.2); signing in again gives a read-only account.
@@ -307,10 +308,10 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
     },
 
     async setRole(admin: Me, memberId: string, input: z.output<typeof roleInput>) {
-      if (memberId === admin.id) throw new AppError("self", "You cannot change your own role.", 422);
       return db.transaction().execute(async (tx) => {
         const profile = await tx.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
         if (!profile) throw notFound("That member");
+        assertMayActOn(admin, { id: memberId, role: profile.role }, "change role");
         await tx.updateTable("profiles").set({ role: input.role, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
         // Sessions begun under the old role end with it.
         await endSessionsOf(tx, memberId, "role changed");

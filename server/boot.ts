@@ -13,6 +13,9 @@ import { createMailer } from "./mail/mailer";
 import { createOutbox } from "./mail/outbox";
 import { createServices } from "./services";
 
+/** Temp files of uploads older than this were cut off (an upload takes seconds, at most minutes). */
+export const TEMP_MAX_AGE_MS = 60 * 60 * 1000;
+
 export type Running = { server: Server; url: string; close(): Promise<void> };
 
 /** Migrates, seeds the demo when asked and the database is empty, starts the local fakes, listens. */
@@ -45,6 +48,8 @@ export async function boot(
   const cleanup = async () => {
     const removed = await services.uploads.cleanupDrafts();
     if (removed) logger.info({ removed }, "old drafts removed");
+    const temp = await services.store.removeStaleTemp(TEMP_MAX_AGE_MS);
+    if (temp) logger.info({ temp }, "temp upload files left by a crash removed");
     const sessions = await forgetOldSessions(db);
     if (sessions) logger.info({ sessions }, "old session rows removed");
   };

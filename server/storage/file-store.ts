@@ -16,6 +16,11 @@ export type FileStore = {
   removeFolder(prefix: string): Promise<void>;
   /** A private scratch folder for files still being received. */
   tmpDir: string;
+  /**
+   * Removes files in the scratch folder older than `maxAgeMs` (uploads cut off by a crash leave
+   * them behind); returns how many were removed.
+   */
+  removeStaleTemp(maxAgeMs: number, now?: number): Promise<number>;
 };
 
 const safeKey = /^[a-z0-9][a-z0-9/_.-]*$/i;
@@ -49,6 +54,22 @@ export function createLocalFileStore(dataDir: string): FileStore {
     },
     async removeFolder(prefix) {
       await fs.rm(pathOf(prefix), { recursive: true, force: true });
+    },
+    async removeStaleTemp(maxAgeMs, now = Date.now()) {
+      let removed = 0;
+      for (const entry of await fs.readdir(tmpDir, { withFileTypes: true })) {
+        if (!entry.isFile()) continue;
+        const file = path.join(tmpDir, entry.name);
+        try {
+          // An upload still arriving keeps writing, so its mtime stays fresh.
+          if (now - (await fs.stat(file)).mtimeMs <= maxAgeMs) continue;
+          await fs.rm(file, { force: true });
+          removed++;
+        } catch {
+          /* gone meanwhile: finished or removed by its own request */
+        }
+      }
+      return removed;
     },
   };
 }

@@ -48,6 +48,8 @@ export async function boot(
   const cleanup = async () => {
     const removed = await services.uploads.cleanupDrafts();
     if (removed) logger.info({ removed }, "old drafts removed");
+    const trash = await services.store.emptyTrash(TEMP_MAX_AGE_MS);
+    if (trash) logger.debug({ trash }, "removed files deleted for good");
     const temp = await services.store.removeStaleTemp(TEMP_MAX_AGE_MS);
     if (temp) logger.info({ temp }, "temp upload files left by a crash removed");
     const sessions = await forgetOldSessions(db);

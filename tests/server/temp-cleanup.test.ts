@@ -1,10 +1,10 @@
-import { existsSync, mkdirSync, mkdtempSync, rmSync, utimesSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, utimesSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { afterEach, describe, expect, it } from "vitest";
 import { boot, TEMP_MAX_AGE_MS } from "../../server/boot";
 import { loadConfig } from "../../server/config";
-import { createLocalFileStore } from "../../server/storage/file-store";
+import { createLocalFileStore, TRASH } from "../../server/storage/file-store";
 
 let dir = "";
 afterEach(() => rmSync(dir, { recursive: true, force: true }));
@@ -29,6 +29,22 @@ describe("temp upload files left by a crash", () => {
     expect(existsSync(old)).toBe(false);
     expect(existsSync(fresh)).toBe(true);
     expect(existsSync(path.join(store.tmpDir, "a-folder"))).toBe(true);
+  });
+
+  it("removed files wait in the trash for an hour (for a backup running meanwhile), then go", async () => {
+    dir = mkdtempSync(path.join(os.tmpdir(), "blendwell-tmp-"));
+    const store = createLocalFileStore(dir);
+    mkdirSync(path.join(dir, "images", "u1"), { recursive: true });
+    writeFileSync(path.join(dir, "images", "u1", "thumb.webp"), "x");
+    await store.removeFolder("images/u1");
+    await store.remove("originals/never-existed.jpg");
+    expect(existsSync(path.join(dir, "images", "u1"))).toBe(false);
+    const batches = readdirSync(path.join(dir, TRASH));
+    expect(batches).toHaveLength(1);
+    expect(existsSync(path.join(dir, TRASH, batches[0]!, "images", "u1", "thumb.webp"))).toBe(true);
+    expect(await store.emptyTrash(TEMP_MAX_AGE_MS)).toBe(0);
+    expect(await store.emptyTrash(TEMP_MAX_AGE_MS, Date.now() + TEMP_MAX_AGE_MS + 1000)).toBe(1);
+    expect(readdirSync(path.join(dir, TRASH))).toEqual([]);
   });
 
   it("are removed when the server starts", async () => {

@@ -1,4 +1,4 @@
-import { existsSync } from "node:fs";
+import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { ExpressAuth } from "@auth/express";
 import express, { type RequestHandler } from "express";
@@ -10,6 +10,7 @@ import { loadCurrentUser } from "./auth/current-user";
 import type { AppConfig } from "./config";
 import type { Db } from "./db/client";
 import type { Mailer } from "./mail/mailer";
+import { createAnonymousCache } from "./middleware/anonymous-cache";
 import { apiNotFound, AppError, errorHandler, refuseInvalidUtf8 } from "./middleware/errors";
 import { signInLimits } from "./middleware/rate-limits";
 import { sameOrigin } from "./middleware/same-origin";
@@ -91,6 +92,9 @@ export function createApp(deps: AppDeps) {
   api.use(sameOrigin(config.appUrl));
   api.use(loadCurrentUser(db, authConfig, { demoAllowed: config.demo }));
   api.use(refuseWritesWhileSuspended(db));
+  // Visitors' gallery and search answers, a few seconds at most and never past a write.
+  const visitorCache = createAnonymousCache({ ttlMs: 5000, maxEntries: 500 });
+  api.use(visitorCache.trackWrites);
   api.get("/health", (_req, res) => {
     res.json({ ok: true });
   });
@@ -98,7 +102,7 @@ export function createApp(deps: AppDeps) {
   api.use(inksRouter(db));
   const scale = config.rateLimits.memberScale;
   api.use(uploadsRouter({ ...deps.services, limitScale: scale }));
-  api.use(stripsRouter(deps.services.strips, scale));
+  api.use(stripsRouter(deps.services.strips, scale, visitorCache));
   api.use(moderationRouter(deps.services.moderation, scale));
   api.use(bindersRouter(deps.services.binders));
   api.use(stashRouter(deps.services.stash));
@@ -112,15 +116,23 @@ export function createApp(deps: AppDeps) {
   } else {
     const clientDir = deps.clientDir ?? path.resolve("dist");
     const index = path.join(clientDir, "index.html");
-    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
-    app.get("/{*path}", (req, res, next) => {
+    // The page every client route gets, read once: it changes only with a new build, which
+    // means a restart (`npm start` builds first). Saves the file calls on every page view.
+    let indexHtml: string | null = null;
+    const serveIndex: RequestHandler = (req, res, next) => {
       if (req.path.startsWith("/auth/")) return next();
-      if (!existsSync(index)) {
-        res.status(503).type("text").send("The client is not built yet: run `npm run build`.");
-        return;
+      if (indexHtml === null) {
+        if (!existsSync(index)) {
+          res.status(503).type("text").send("The client is not built yet: run `npm run build`.");
+          return;
+        }
+        indexHtml = readFileSync(index, "utf8");
       }
-      res.sendFile(index, { maxAge: 0 });
-    });
+      res.set("Cache-Control", "public, max-age=0").type("html").send(indexHtml);
+    };
+    app.get("/", serveIndex); // before the static files: "/" is never a file there
+    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
+    app.get("/{*path}", serveIndex);
   }
 
   app.use(errorHandler);

@@ -21,7 +21,7 @@ export async function expectSignedInAs(page: Page, name: string) {
 
 export async function signOut(page: Page) {
   await page.getByRole("button", { name: /Account menu for/ }).click();
-  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.getByRole("button", { name: "Sign out", exact: true }).click();
   await expect(page.getByRole("link", { name: "Sign in" }).first()).toBeVisible();
 }
 

@@ -17,7 +17,7 @@ beforeAll(async () => {
   await t.db.insertInto("uploads").values({ id: "cache-upload", owner_id: author.id, status: "ready", mime: "image/webp", byte_size: 1, created_at: at, updated_at: at }).execute();
   const row = await t.db
     .insertInto("strips")
-    .values({ author_id: author.id, upload_id: "cache-upload", title: "Dusk over the mill pond", paper: "smooth-cardstock", status: "published", orientation: "horizontal", ink_count: 0, created_at: at, updated_at: at, published_at: at })
+    .values({ author_id: author.id, upload_id: "cache-upload", title: "Dusk over the mill pond", paper: "smooth-cardstock", notes_html: "", tools_json: "[]", status: "published", orientation: "horizontal", ink_count: 0, created_at: at, updated_at: at, published_at: at })
     .returning("id")
     .executeTakeFirstOrThrow();
   stripId = row.id;

@@ -29,6 +29,8 @@ export function assertMayActOn(actor: Pick<Me, "id" | "role">, target: { id: str
     throw new AppError("self", action === "suspend" ? "You cannot suspend yourself." : "You cannot change your own role.", 422);
   }
   if (!mayActOn(actor.role, target.role, action)) {
-    throw new AppError("forbidden", `A ${actor.role} cannot ${action === "set standing" ? "change the standing of" : action === "suspend" ? "suspend" : "change the role of"} a ${target.role}.`, 403);
+    const verb = action === "set standing" ? "change the standing of" : action === "suspend" ? "suspend" : "change the role of";
+    const an = (role: Role) => (role === "admin" ? "an admin" : `a ${role}`);
+    throw new AppError("forbidden", `As ${an(actor.role)}, you cannot ${verb} ${an(target.role)}.`, 403);
   }
 }

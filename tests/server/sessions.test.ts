@@ -182,6 +182,18 @@ describe("production", () => {
         .send({ csrfToken: csrf.body.csrfToken, email: DEMO.admin, password: DEMO.password, callbackUrl: "/" });
       expect(new URL(res.body.url, "http://x").searchParams.get("error")).toBe("CredentialsSignin");
       expect((await request(prod.app).get("/api/dev/mail")).status).toBe(404);
+      // Nor by e-mailed link: no link is even sent to a demo account.
+      const csrf2 = await request(prod.app).get("/auth/csrf").expect(200);
+      const jar2 = [csrf2.headers["set-cookie"] ?? []].flat().map((c) => c.split(";")[0]!);
+      const link = await request(prod.app)
+        .post("/auth/signin/nodemailer")
+        .set("Cookie", jar2.join("; "))
+        .set("X-Auth-Return-Redirect", "1")
+        .type("form")
+        .send({ csrfToken: csrf2.body.csrfToken, email: DEMO.admin, callbackUrl: "/" });
+      expect(new URL(link.body.url, "http://x").searchParams.get("error")).toBeTruthy();
+      await new Promise((r) => setTimeout(r, 200));
+      expect((await prod.mail()).filter((m) => m.to.includes(DEMO.admin))).toEqual([]);
     } finally {
       await prod.close();
     }

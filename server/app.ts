@@ -1,4 +1,4 @@
-import { existsSync } from "node:fs";
+import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { ExpressAuth } from "@auth/express";
 import express, { type RequestHandler } from "express";
@@ -10,9 +10,11 @@ import { loadCurrentUser } from "./auth/current-user";
 import type { AppConfig } from "./config";
 import type { Db } from "./db/client";
 import type { Mailer } from "./mail/mailer";
-import { apiNotFound, errorHandler } from "./middleware/errors";
+import { createAnonymousCache } from "./middleware/anonymous-cache";
+import { apiNotFound, AppError, errorHandler, refuseInvalidUtf8 } from "./middleware/errors";
 import { signInLimits } from "./middleware/rate-limits";
 import { sameOrigin } from "./middleware/same-origin";
+import { refuseWritesWhileSuspended } from "./middleware/suspension";
 import { accountsRouter } from "./modules/accounts/accounts.router";
 import { devMailRouter } from "./modules/dev/dev-mail.router";
 import { inksRouter } from "./modules/inks/inks.router";
@@ -75,12 +77,24 @@ export function createApp(deps: AppDeps) {
   const limits = signInLimits(config.rateLimits);
   app.post("/auth/callback/credentials", ...limits.passwords);
   app.post("/auth/signin/nodemailer", ...limits.mail);
+  // Auth.js's own body parsing takes JSON too, and some shapes of it crash inside Auth.js (a 500);
+  // every form we post to it is URL-encoded, so nothing else gets there.
+  app.post("/auth/{*action}", (req, _res, next) => {
+    if (!req.is("application/x-www-form-urlencoded")) {
+      throw new AppError("unsupported_media_type", "Send sign-in forms as application/x-www-form-urlencoded.", 415);
+    }
+    next();
+  });
   app.use("/auth", ExpressAuth(authConfig));
 
   const api = express.Router();
-  api.use(express.json({ limit: "100kb", strict: true }));
+  api.use(express.json({ limit: "100kb", strict: true, verify: refuseInvalidUtf8 }));
   api.use(sameOrigin(config.appUrl));
-  api.use(loadCurrentUser(db, authConfig));
+  api.use(loadCurrentUser(db, authConfig, { demoAllowed: config.demo }));
+  api.use(refuseWritesWhileSuspended(db));
+  // Visitors' gallery and search answers, a few seconds at most and never past a write.
+  const visitorCache = createAnonymousCache({ ttlMs: 5000, maxEntries: 500 });
+  api.use(visitorCache.trackWrites);
   api.get("/health", (_req, res) => {
     res.json({ ok: true });
   });
@@ -88,12 +102,12 @@ export function createApp(deps: AppDeps) {
   api.use(inksRouter(db));
   const scale = config.rateLimits.memberScale;
   api.use(uploadsRouter({ ...deps.services, limitScale: scale }));
-  api.use(stripsRouter(deps.services.strips, scale));
+  api.use(stripsRouter(deps.services.strips, scale, visitorCache));
   api.use(moderationRouter(deps.services.moderation, scale));
   api.use(bindersRouter(deps.services.binders));
   api.use(stashRouter(deps.services.stash));
   api.use(lookAlikesRouter(db, { stashOf: async (userId) => new Set(await stashInkIds(db, userId)) }));
-  if (config.demo || config.dev) api.use(devMailRouter(config.dataDir));
+  if (config.demo) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);
   app.use("/api", api);
 
@@ -102,15 +116,23 @@ export function createApp(deps: AppDeps) {
   } else {
     const clientDir = deps.clientDir ?? path.resolve("dist");
     const index = path.join(clientDir, "index.html");
-    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
-    app.get("/{*path}", (req, res, next) => {
+    // The page every client route gets, read once: it changes only with a new build, which
+    // means a restart (`npm start` builds first). Saves the file calls on every page view.
+    let indexHtml: string | null = null;
+    const serveIndex: RequestHandler = (req, res, next) => {
       if (req.path.startsWith("/auth/")) return next();
-      if (!existsSync(index)) {
-        res.status(503).type("text").send("The client is not built yet: run `npm run build`.");
-        return;
+      if (indexHtml === null) {
+        if (!existsSync(index)) {
+          res.status(503).type("text").send("The client is not built yet: run `npm run build`.");
+          return;
+        }
+        indexHtml = readFileSync(index, "utf8");
       }
-      res.sendFile(index, { maxAge: 0 });
-    });
+      res.set("Cache-Control", "public, max-age=0").type("html").send(indexHtml);
+    };
+    app.get("/", serveIndex); // before the static files: "/" is never a file there
+    app.use(express.static(clientDir, { index: false, maxAge: "1h" }));
+    app.get("/{*path}", serveIndex);
   }
 
   app.use(errorHandler);

@@ -2,6 +2,7 @@ import type { Server } from "node:http";
 import type { RequestHandler } from "express";
 import pino from "pino";
 import { createApp } from "./app";
+import { forgetOldSessions } from "./auth/sessions";
 import type { AppConfig } from "./config";
 import { openDatabase } from "./db/client";
 import { migrateToLatest } from "./db/migrate";
@@ -12,6 +13,9 @@ import { createMailer } from "./mail/mailer";
 import { createOutbox } from "./mail/outbox";
 import { createServices } from "./services";
 
+/** Temp files of uploads older than this were cut off (an upload takes seconds, at most minutes). */
+export const TEMP_MAX_AGE_MS = 60 * 60 * 1000;
+
 export type Running = { server: Server; url: string; close(): Promise<void> };
 
 /** Migrates, seeds the demo when asked and the database is empty, starts the local fakes, listens. */
@@ -20,6 +24,8 @@ export async function boot(
   opts: { seedIfEmpty?: boolean; clientMiddleware?: RequestHandler } = {},
 ): Promise<Running> {
   const logger = pino({ level: config.logLevel });
+  if (config.demo) logger.warn("demo mode is on: demo accounts can sign in and mail stays on this machine");
+  if (config.demoRefused) logger.warn("DEMO_MODE is ignored under NODE_ENV=production: no demo accounts, no mail viewer");
   const db = openDatabase(config.dbFile);
   await migrateToLatest(db);
 
@@ -42,6 +48,12 @@ export async function boot(
   const cleanup = async () => {
     const removed = await services.uploads.cleanupDrafts();
     if (removed) logger.info({ removed }, "old drafts removed");
+    const trash = await services.store.emptyTrash(TEMP_MAX_AGE_MS);
+    if (trash) logger.debug({ trash }, "removed files deleted for good");
+    const temp = await services.store.removeStaleTemp(TEMP_MAX_AGE_MS);
+    if (temp) logger.info({ temp }, "temp upload files left by a crash removed");
+    const sessions = await forgetOldSessions(db);
+    if (sessions) logger.info({ sessions }, "old session rows removed");
   };
   if (seeding) {
     console.log("Posting the demo strips through the real analysis (first start only, under a minute)…");

@@ -21,8 +21,10 @@ export type AppConfig = {
   /** Vite middleware and reload instead of the built client. */
   dev: boolean;
   production: boolean;
-  /** Demo accounts may sign in and the local SMTP server + mail viewer are on. */
+  /** Demo accounts may sign in and the local SMTP server + mail viewer (admins only) are on. Never in production. */
   demo: boolean;
+  /** DEMO_MODE was asked for under NODE_ENV=production and refused (start-up says so). */
+  demoRefused: boolean;
   /** Public origin, e.g. http://localhost:3000; used in mail links and the Origin check. */
   appUrl: string;
   authSecret: string;
@@ -69,7 +71,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, opts: { dev?: b
     dbFile: path.join(dataDir, "blendwell.sqlite"),
     dev: opts.dev ?? false,
     production,
-    demo: flag(env.DEMO_MODE) ?? !production,
+    // Production never serves demo accounts or the mail viewer, whatever DEMO_MODE says.
+    demo: !production && (flag(env.DEMO_MODE) ?? true),
+    demoRefused: production && flag(env.DEMO_MODE) === true,
     appUrl: (env.APP_URL || `http://localhost:${port}`).replace(/\/$/, ""),
     authSecret: authSecretFor(dataDir, env.AUTH_SECRET),
     mailFrom: env.MAIL_FROM || "Blendwell <hello@blendwell.test>",

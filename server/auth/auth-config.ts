@@ -8,8 +8,9 @@ import type { AppConfig } from "../config";
 import type { Db } from "../db/client";
 import type { Mailer } from "../mail/mailer";
 import { ensureProfile } from "../modules/accounts/accounts.service";
-import { findAccountRow, findUserByEmail } from "../modules/accounts/accounts.repository";
+import { findAccountRow, findProfile, findUserByEmail } from "../modules/accounts/accounts.repository";
 import { DUMMY_HASH, verifyPassword } from "./passwords";
+import { endSession, SESSION_MAX_AGE_S, startSession } from "./sessions";
 import { signInMail } from "./sign-in-mail";
 
 const credentialsSchema = z.object({ email: emailSchema, password: z.string().min(1).max(200) });
@@ -28,7 +29,8 @@ export function createAuthConfig(deps: { db: Db; config: AppConfig; mailer: Mail
     trustHost: true,
     basePath: "/auth",
     // Magic links and passwords together need JWT sessions; the adapter still keeps users and tokens.
-    session: { strategy: "jwt", maxAge: 30 * 24 * 60 * 60 },
+    // The JWT names a row in member_sessions, checked on every request (docs/decisions/006).
+    session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_S },
     // The adapter types its own table set; ours is a superset of it.
     adapter: KyselyAdapter(db as unknown as Parameters<typeof KyselyAdapter>[0]),
     pages: {
@@ -62,15 +64,29 @@ export function createAuthConfig(deps: { db: Db; config: AppConfig; mailer: Mail
       }),
     ],
     callbacks: {
-      jwt({ token, user }) {
-        if (user?.id) token.sub = user.id;
+      async signIn({ user }) {
+        // Production never serves demo accounts, by password or by e-mailed link.
+        if (config.demo || !user.id) return true;
+        const profile = await findProfile(db, user.id);
+        return profile?.is_demo !== 1;
+      },
+      async jwt({ token, user }) {
+        // `user` is given only at sign-in: that is when a server-side session begins.
+        if (user?.id) {
+          token.sub = user.id;
+          token.sid = await startSession(db, user.id);
+        }
         return token;
       },
       session({ session, token }) {
-        return { expires: session.expires, user: { id: token.sub ?? "" } } as typeof session;
+        return { expires: session.expires, user: { id: token.sub ?? "" }, sid: typeof token.sid === "string" ? token.sid : "" } as unknown as typeof session;
       },
     },
     events: {
+      async signOut(message) {
+        const sid = "token" in message ? message.token?.sid : undefined;
+        if (typeof sid === "string") await endSession(db, sid, "signed out");
+      },
       async createUser({ user }) {
         if (user.id && user.email) await ensureProfile(db, { id: user.id, email: user.email, name: user.name });
       },

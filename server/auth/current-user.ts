@@ -4,24 +4,37 @@ import type { Me, Role } from "../../shared/schemas/accounts";
 import type { Db } from "../db/client";
 import { AppError } from "../middleware/errors";
 import { loadMe } from "../modules/accounts/accounts.service";
+import { checkSession } from "./sessions";
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Locals {
       user: Me | null;
+      /** The member_sessions id of the signed-in request (see ./sessions.ts). */
+      sessionId: string | null;
     }
   }
 }
 
-/** Loads the signed-in member (fresh from the database, so role changes apply at once). */
-export function loadCurrentUser(db: Db, authConfig: ExpressAuthConfig): RequestHandler {
+/**
+ * Loads the signed-in member (fresh from the database, so role changes apply at once), but only
+ * while the server-side session the cookie names is still open.
+ */
+export function loadCurrentUser(db: Db, authConfig: ExpressAuthConfig, opts: { demoAllowed: boolean }): RequestHandler {
   return async (req, res, next) => {
     res.locals.user = null;
+    res.locals.sessionId = null;
     if (!hasSessionCookie(req)) return next();
-    const session = await getSession(req, authConfig);
+    const session = (await getSession(req, authConfig)) as { user?: { id?: string }; sid?: string } | null;
     const id = session?.user?.id;
-    if (id) res.locals.user = await loadMe(db, id);
+    const sid = session?.sid;
+    // A cookie without a session id predates server-side sessions: it counts as signed out.
+    if (!id || !sid) return next();
+    const check = await checkSession(db, sid, id, { demoAllowed: opts.demoAllowed });
+    if (!check.ok) return next();
+    res.locals.user = await loadMe(db, id);
+    res.locals.sessionId = res.locals.user ? sid : null;
     next();
   };
 }

@@ -225,6 +225,17 @@ export interface StashItemTable {
   added_at: string;
 }
 
+export interface MemberSessionTable {
+  id: string;
+  user_id: string;
+  created_at: string;
+  last_seen_at: string;
+  /** Absolute end, however active the session is. */
+  expires_at: string;
+  ended_at: string | null;
+  ended_reason: string | null;
+}
+
 export interface Database extends SearchTables {
   User: UserTable;
   Account: AccountTable;
@@ -245,6 +256,7 @@ export interface Database extends SearchTables {
   binders: BinderTable;
   binder_items: BinderItemTable;
   stash_items: StashItemTable;
+  member_sessions: MemberSessionTable;
 }
 
 export type Profile = Selectable<ProfileTable>;

@@ -75,11 +75,18 @@ export function demoSignInsText(appUrl: string): string {
     const what = m.role === "member" ? `${m.standing} member` : m.role;
     return `  ${m.email.padEnd(width)}  ${what}`;
   });
+  const rule = "!".repeat(78);
+  // Loud on purpose: demo mode must never be left on by mistake on a server others can reach.
   return [
+    rule,
+    "!!  DEMO MODE IS ON: shared demo accounts with a published password can sign in,",
+    "!!  and mail is kept on this machine instead of being delivered.",
+    "!!  Never expose this server to others. Set NODE_ENV=production to switch it off.",
+    rule,
     `Blendwell is running on ${appUrl}`,
     `Demo sign-ins (password: ${DEMO_PASSWORD}):`,
     ...lines,
     `  (and ${demoMembers.length - 4} more demo members; see README)`,
-    `Mail sent by the app: ${appUrl}/dev/mail`,
+    `Mail sent by the app (sign in as ${demoMembers.find((m) => m.role === "admin")?.email ?? "the admin"} first): ${appUrl}/dev/mail`,
   ].join("\n");
 }

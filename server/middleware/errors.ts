@@ -18,7 +18,9 @@ export class AppError extends Error {
 export const notFound = (what = "That") => new AppError("not_found", `${what} was not found.`, 404);
 
 export function fieldsFromZod(error: ZodError | z.core.$ZodError): Record<string, string[]> {
-  const fields: Record<string, string[]> = {};
+  // Keys come from the caller ("constructor", "__proto__", "toString"…): a map with no
+  // prototype, so no key can find an inherited property instead of its own list (issue 12).
+  const fields: Record<string, string[]> = Object.create(null);
   for (const issue of error.issues) {
     const key = issue.path.length ? issue.path.join(".") : "_";
     if (issue.code === "unrecognized_keys") {
@@ -43,7 +45,37 @@ const bodyParserErrors: Record<string, [number, string, string]> = {
   "request.aborted": [400, "aborted", "The request was cut short."],
   "request.size.invalid": [400, "bad_length", "The request body does not match its length."],
   "stream.encoding.set": [400, "bad_request", "The request could not be read."],
+  "entity.verify.failed": [400, "bad_request", "The request could not be read."],
+  "encoding.invalid": [400, "invalid_utf8", "The request body is not valid UTF-8."],
 };
+
+/**
+ * express.json's `verify` hook: refuse bytes that are not UTF-8 instead of letting them become
+ * U+FFFD replacement characters in a member's name (RFC 8259 §8.1: JSON text is UTF-8).
+ */
+export function refuseInvalidUtf8(_req: unknown, _res: unknown, buf: Buffer) {
+  try {
+    new TextDecoder("utf-8", { fatal: true }).decode(buf);
+  } catch {
+    throw Object.assign(new Error("The request body is not valid UTF-8."), { status: 400, type: "encoding.invalid" });
+  }
+}
+
+/**
+ * Multipart parse errors from busboy ("Unexpected end of form", "Boundary not found",
+ * "Malformed part header"…) are plain Errors without a status: the caller's mistake, not ours.
+ * Wraps a multer middleware so they become 400s (multer has already removed any temp file).
+ */
+export function multipartErrorsAre400(mw: RequestHandler): RequestHandler {
+  return (req, res, next) => {
+    mw(req, res, (err?: unknown) => {
+      if (!err || err instanceof MulterError || err instanceof AppError) return next(err);
+      const status = (err as { status?: unknown }).status;
+      if (typeof status === "number" && status < 500) return next(err);
+      next(new AppError("malformed_upload", "The upload could not be read: send it as multipart/form-data.", 400));
+    });
+  };
+}
 
 const multerErrors: Partial<Record<MulterError["code"], [number, string]>> = {
   LIMIT_FILE_SIZE: [413, "The file is too large."],

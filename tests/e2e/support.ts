@@ -1,4 +1,4 @@
-import { expect, type Page } from "@playwright/test";
+import { expect, type APIRequestContext, type Page } from "@playwright/test";
 
 export const PASSWORD = "blendwell-demo";
 export const people = {
@@ -21,10 +21,21 @@ export async function expectSignedInAs(page: Page, name: string) {
 
 export async function signOut(page: Page) {
   await page.getByRole("button", { name: /Account menu for/ }).click();
-  await page.getByRole("button", { name: "Sign out" }).click();
+  await page.getByRole("button", { name: "Sign out", exact: true }).click();
   await expect(page.getByRole("link", { name: "Sign in" }).first()).toBeVisible();
 }
 
 export async function screenshot(page: Page, name: string) {
   await page.screenshot({ path: `test-results/e2e/screens/${name}.png`, fullPage: true });
+}
+
+/** Signs an API request context in (password, through Auth.js), e.g. as the admin to read demo mail. */
+export async function signInRequest(request: APIRequestContext, email: string, password = PASSWORD) {
+  const { csrfToken } = await (await request.get("/auth/csrf")).json();
+  const res = await request.post("/auth/callback/credentials", {
+    headers: { "X-Auth-Return-Redirect": "1" },
+    form: { csrfToken, email, password, callbackUrl: "/" },
+  });
+  expect(res.ok()).toBe(true);
+  expect(String((await res.json()).url)).not.toContain("error=");
 }

@@ -229,7 +229,10 @@ describe("standing, suspension and roles", () => {
     const ruthId = await idOf(ruth);
     await ivo.put(`/api/members/${ruthId}/suspension`).send({ days: 7, reason: "repeated spam" }).expect(200);
     const target = await postStrip(mara, "Ruth cannot report this");
-    expect((await ruth.post(`/api/strips/${target.id}/reports`).send({ reason: "wrong inks" }).expect(403)).body.error.code).toBe("suspended");
+    // The suspension ended her session (issue 12); signed in again, the account is read-only.
+    await ruth.post(`/api/strips/${target.id}/reports`).send({ reason: "wrong inks" }).expect(401);
+    const ruthAgain = await signedIn(t, "ruth@blendwell.test");
+    expect((await ruthAgain.post(`/api/strips/${target.id}/reports`).send({ reason: "wrong inks" }).expect(403)).body.error.code).toBe("suspended");
     const adminId = await idOf(admin);
     await ivo.put(`/api/members/${adminId}/suspension`).send({ days: 7, reason: "testing limits" }).expect(403);
     expect((await admin.get("/api/me")).body.suspendedUntil).toBeNull();

@@ -54,3 +54,15 @@ export async function upsertPassword(db: DbOrTx, userId: string, hash: string, n
     .onConflict((oc) => oc.column("user_id").doUpdateSet({ hash, updated_at: now }))
     .execute();
 }
+
+/** The reason a moderator gave for the member's latest suspension (the audit trail keeps it). */
+export async function latestSuspensionReason(db: DbOrTx, userId: string): Promise<string | null> {
+  const row = await db
+    .selectFrom("moderation_actions")
+    .select("reason")
+    .where("member_id", "=", userId)
+    .where("action", "=", "suspend")
+    .orderBy("id", "desc")
+    .executeTakeFirst();
+  return row?.reason ?? null;
+}

@@ -4,15 +4,15 @@ import { idParams } from "../../../shared/schemas/common";
 import { brandInput, inkInput, inkListQuery, inkPatch } from "../../../shared/schemas/inks";
 import { requireRole } from "../../auth/current-user";
 import type { Db } from "../../db/client";
-import { AppError } from "../../middleware/errors";
+import { AppError, multipartErrorsAre400 } from "../../middleware/errors";
 import { validate } from "../../middleware/validate";
 import { parseCatalogueCsv } from "./catalogue-csv";
 import * as service from "./inks.service";
 
-const csvUpload = multer({
+const csvUpload = multipartErrorsAre400(multer({
   storage: multer.memoryStorage(),
   limits: { fileSize: 2 * 1024 * 1024, files: 1, fields: 5, parts: 6 },
-}).single("file");
+}).single("file"));
 
 export function inksRouter(db: Db): Router {
   const router = Router();

@@ -21,6 +21,8 @@ import type { ExpressionBuilder } from "kysely";
 import { AppError, notFound } from "../../middleware/errors";
 import * as stripsRepo from "../strips/strips.repository";
 import { bandsOf, hydrate, isSuspended, tagBands } from "../strips/strips.service";
+import { assertMayActOn } from "../../auth/role-rules";
+import { endSessionsOf } from "../../auth/sessions";
 import { notify } from "./notify";
 
 type Decision = z.output<typeof decisionInput>;
@@ -276,6 +278,7 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
       return db.transaction().execute(async (tx) => {
         const profile = await tx.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
         if (!profile) throw notFound("That member");
+        assertMayActOn(mod, { id: memberId, role: profile.role }, "set standing");
         await tx.updateTable("profiles").set({ standing: input.standing, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
         await audit(tx, { moderatorId: mod.id, action: input.standing === "trusted" ? "trust" : "untrust", memberId, reason: input.reason, before: profile.standing, after: input.standing });
         return { id: memberId, standing: input.standing };
@@ -283,13 +286,14 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
     },
 
     async suspend(mod: Me, memberId: string, input: z.output<typeof suspensionInput>) {
-      if (memberId === mod.id) throw new AppError("self", "You cannot suspend yourself.", 422);
       return db.transaction().execute(async (tx) => {
         const profile = await tx.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
         if (!profile) throw notFound("That member");
-        if (profile.role !== "member" && mod.role !== "admin") throw new AppError("forbidden", "Only an admin can suspend a moderator or an admin.", 403);
+        assertMayActOn(mod, { id: memberId, role: profile.role }, "suspend");
         const until = input.days === 0 ? null : new Date(Date.now() + input.days * 24 * 60 * 60 * 1000).toISOString();
         await tx.updateTable("profiles").set({ suspended_until: until, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
+        // A suspension ends the member's sessions (ASVS 5.0 V7.4.2); signing in again gives a read-only account.
+        if (until) await endSessionsOf(tx, memberId, "suspended");
         await audit(tx, { moderatorId: mod.id, action: until ? "suspend" : "lift suspension", memberId, reason: input.reason, before: profile.suspended_until, after: until });
         await notify(
           tx,
@@ -304,11 +308,13 @@ export function createModerationService(deps: { db: Db; appUrl: string }) {
     },
 
     async setRole(admin: Me, memberId: string, input: z.output<typeof roleInput>) {
-      if (memberId === admin.id) throw new AppError("self", "You cannot change your own role.", 422);
       return db.transaction().execute(async (tx) => {
         const profile = await tx.selectFrom("profiles").selectAll().where("user_id", "=", memberId).executeTakeFirst();
         if (!profile) throw notFound("That member");
+        assertMayActOn(admin, { id: memberId, role: profile.role }, "change role");
         await tx.updateTable("profiles").set({ role: input.role, updated_at: nowIso() }).where("user_id", "=", memberId).execute();
+        // Sessions begun under the old role end with it.
+        await endSessionsOf(tx, memberId, "role changed");
         await audit(tx, { moderatorId: admin.id, action: "change role", memberId, reason: input.reason, before: profile.role, after: input.role });
         return { id: memberId, role: input.role };
       });

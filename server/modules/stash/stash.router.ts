@@ -2,11 +2,11 @@ import { Router } from "express";
 import multer from "multer";
 import { stashInkParams, stashItemInput, stashItemPatch, stashPut } from "../../../shared/schemas/stash";
 import { requireUser } from "../../auth/current-user";
-import { AppError } from "../../middleware/errors";
+import { AppError, multipartErrorsAre400 } from "../../middleware/errors";
 import { validate } from "../../middleware/validate";
 import type { StashService } from "./stash.service";
 
-const csvUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 1024 * 1024, files: 1, fields: 2, parts: 3 } }).single("file");
+const csvUpload = multipartErrorsAre400(multer({ storage: multer.memoryStorage(), limits: { fileSize: 1024 * 1024, files: 1, fields: 2, parts: 3 } }).single("file"));
 
 export function stashRouter(stash: StashService): Router {
   const router = Router();

@@ -3,6 +3,7 @@ import { z } from "zod";
 import { stripSearchQuery } from "../../../shared/schemas/search";
 import { stripIdParams, stripInput, stripPatch } from "../../../shared/schemas/strips";
 import { requireUser } from "../../auth/current-user";
+import type { AnonymousCache } from "../../middleware/anonymous-cache";
 import { memberLimit } from "../../middleware/member-limits";
 import { validate } from "../../middleware/validate";
 import type { StripsService } from "./strips.service";
@@ -10,12 +11,20 @@ import type { StripsService } from "./strips.service";
 const imageParams = z.strictObject({ id: stripIdParams.shape.id, variant: z.enum(["display", "thumb"]) });
 const memberParams = z.strictObject({ id: z.string().uuid() });
 
-export function stripsRouter(strips: StripsService, limitScale = 1): Router {
+export function stripsRouter(strips: StripsService, limitScale = 1, cache?: AnonymousCache): Router {
   const router = Router();
 
-  router.get("/strips", validate({ query: stripSearchQuery }), async (req, res) => {
-    res.json(await strips.search(req.query as never, res.locals.user ?? null));
-  });
+  const search: Parameters<AnonymousCache["cached"]>[0] = (req, res) => strips.search(req.query as never, res.locals.user ?? null);
+  router.get(
+    "/strips",
+    ...(cache ? [cache.lookup] : []),
+    validate({ query: stripSearchQuery }),
+    cache
+      ? cache.cached(search)
+      : async (req, res) => {
+          res.json(await search(req, res));
+        },
+  );
 
   const postLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 10, trusted: 60, message: "You have posted many strips in the last hour. Please wait a while.", scale: limitScale });
 

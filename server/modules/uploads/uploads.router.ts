@@ -7,7 +7,7 @@ import { outlineCorrectionInput } from "../../../shared/schemas/outlines";
 import { reanalyseInput, uploadFields, uploadIdParams } from "../../../shared/schemas/uploads";
 import { requireUser } from "../../auth/current-user";
 import { DEFAULT_MAX_BYTES, DEFAULT_MAX_PIXELS, ImageError, readHeaderInfo, sniffImageBytes } from "../../images";
-import { AppError, fieldsFromZod, notFound } from "../../middleware/errors";
+import { AppError, fieldsFromZod, multipartErrorsAre400, notFound } from "../../middleware/errors";
 import { memberLimit } from "../../middleware/member-limits";
 import { validate } from "../../middleware/validate";
 import type { FileStore } from "../../storage/file-store";
@@ -58,13 +58,13 @@ export function uploadsRouter(deps: { uploads: UploadsService; store: FileStore;
   const { uploads, store } = deps;
   const router = Router();
   mkdirSync(store.tmpDir, { recursive: true });
-  const receive = multer({
+  const receive = multipartErrorsAre400(multer({
     storage: multer.diskStorage({
       destination: store.tmpDir,
       filename: (_req, _file, cb) => cb(null, `upload-${randomUUID()}`),
     }),
     limits: { fileSize: DEFAULT_MAX_BYTES, files: 1, fields: 4, parts: 5, fieldSize: 1024 },
-  }).single("image");
+  }).single("image"));
 
   const uploadLimit = memberLimit({ windowMs: 60 * 60 * 1000, newMember: 20, trusted: 120, message: "You have uploaded many photos in the last hour. Please wait a while.", scale: deps.limitScale });
 

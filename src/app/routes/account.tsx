@@ -8,6 +8,7 @@ import { PasswordForm } from "../../features/accounts/components/password-form";
 import { ProfileForm } from "../../features/accounts/components/profile-form";
 import { RequireRole } from "../../features/accounts/components/require-role";
 import { RoleBadge } from "../../features/accounts/components/role-badge";
+import { SignOutEverywhere } from "../../features/accounts/components/sign-out-everywhere";
 import { formatDate, formatDateTime } from "../../lib/format";
 
 const standingText: Record<Me["standing"], { label: string; note: string }> = {
@@ -87,6 +88,10 @@ export default function AccountPage() {
               <Card>
                 <h2 className="mb-2 text-xl font-bold">About your account</h2>
                 <AccountFacts me={me} />
+              </Card>
+              <Card>
+                <h2 className="mb-2 text-xl font-bold">Where you are signed in</h2>
+                <SignOutEverywhere />
               </Card>
               <Card>
                 <h2 className="mb-3 text-xl font-bold">Your stash</h2>

@@ -1,3 +1,4 @@
+import { Link } from "react-router";
 import { Button } from "../../components/ui/button";
 import { Loading } from "../../components/ui/loading";
 import { Notice } from "../../components/ui/notice";
@@ -17,7 +18,7 @@ export default function DevMailPage() {
         title="Mail viewer"
         intro="Mail the server would have sent, caught by the local mail server. Newest first."
         actions={
-          mail.data !== null && (
+          Array.isArray(mail.data) && (
             <Button variant="secondary" busy={mail.isFetching} busyLabel="Refreshing…" onClick={() => void mail.refetch()}>
               Refresh
             </Button>
@@ -29,6 +30,18 @@ export default function DevMailPage() {
       ) : mail.isError ? (
         <Notice tone="error" title="The mail could not be loaded" live>
           <p>{errorMessage(mail.error)}</p>
+        </Notice>
+      ) : mail.data === "admins-only" ? (
+        <Notice title="Only for the admin">
+          <p>
+            Mail holds sign-in links, so only an admin can read it. In the demo, sign in as{" "}
+            <strong>admin@blendwell.test</strong> (see the README for the password), then come back.
+          </p>
+          <p className="mt-2">
+            <Link to="/sign-in?next=%2Fdev%2Fmail" className="font-bold text-accent underline">
+              Sign in
+            </Link>
+          </p>
         </Notice>
       ) : mail.data === null ? (
         <Notice title="Mail viewer is off (production)">

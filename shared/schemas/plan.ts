@@ -23,3 +23,60 @@ export const planInksParam = z
       .max(MAX_PLAN_INKS, `a plan takes at most ${MAX_PLAN_INKS} inks`)
       .refine((ids) => ids.every((id, i) => i === 0 || ids[i - 1] !== id), "the same ink cannot sit next to itself"),
   );
+
+/** Which inks a bridge may use between the two ends. */
+export const bridgeInkChoices = ["any", "stash", "oneToBuy"] as const;
+export type BridgeInkChoice = (typeof bridgeInkChoices)[number];
+export const MAX_BRIDGES = 10;
+
+const single = <T extends z.ZodType>(schema: T) =>
+  z.preprocess((v, ctx) => {
+    if (!Array.isArray(v)) return v;
+    ctx.addIssue({ code: "custom", message: "give this only once", input: v });
+    return z.NEVER;
+  }, schema);
+
+const inkId = z.coerce.number({ error: "must be an ink id" }).int("must be an ink id").positive("must be an ink id").max(Number.MAX_SAFE_INTEGER);
+
+/**
+ * GET /api/bridges: up to `limit` bridges of one to three inks between `from` and `to`, best
+ * first. `inks`: any catalogue ink, only inks in my stash, or at most one ink I would have to buy.
+ * `sameBrand`: the inks between come from the end inks' brand(s) only.
+ */
+export const bridgeQuery = z
+  .strictObject({
+    from: single(inkId),
+    to: single(inkId),
+    inks: single(z.enum(bridgeInkChoices, { error: "must be any, stash or oneToBuy" }).default("any")),
+    sameBrand: single(z.enum(["true", "false"], { error: "must be true or false" }).default("false")).transform((v) => v === "true"),
+    limit: single(z.coerce.number({ error: "must be a number" }).int("must be a whole number").min(1, "must be at least 1").max(MAX_BRIDGES, `must be at most ${MAX_BRIDGES}`).default(5)),
+  })
+  .refine((q) => q.from !== q.to, { path: ["to"], message: "choose two different inks" });
+export type BridgeQueryInput = z.input<typeof bridgeQuery>;
+
+export type BridgeStep = {
+  /** ΔE2000 of the join, two decimals. */
+  deltaE: number;
+  words: string;
+  /** Always false for a bridge's own steps (muddy joins are never used); kept so a client can show any join. */
+  muddy: boolean;
+  /** Published strips with these two inks side by side. */
+  strips: number;
+};
+
+export type Bridge = {
+  /** The end inks included, in order. */
+  inks: PlanInk[];
+  steps: BridgeStep[];
+  maxStepDeltaE: number;
+  /** With inks=oneToBuy: the one ink of the bridge not in the stash, if any. */
+  toBuy?: PlanInk | null;
+};
+
+export type BridgeList = {
+  bridges: Bridge[];
+  /** The join being bridged, as it stands. */
+  direct: BridgeStep;
+  /** Inks the search looked through (after the options). */
+  searched: number;
+};

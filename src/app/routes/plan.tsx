@@ -1,18 +1,37 @@
 import { useQuery } from "@tanstack/react-query";
 import { useCallback, useMemo } from "react";
-import { Link, useSearchParams } from "react-router";
+import { Link, useLocation, useSearchParams } from "react-router";
 import type { Ink } from "../../../shared/schemas/inks";
 import { MAX_PLAN_INKS, MIN_PLAN_INKS } from "../../../shared/schemas/plan";
+import { ColourSwatch } from "../../components/ui/colour-swatch";
 import { Loading } from "../../components/ui/loading";
 import { PageHeader } from "../../components/ui/page-header";
 import { useMe } from "../../features/accounts/api/get-me";
 import { useInksById } from "../../features/inks/api/get-inks-by-id";
 import { InkPicker } from "../../features/inks/components/ink-picker";
 import { BlendPreview } from "../../features/plan/components/blend-preview";
+import { BridgeFinder } from "../../features/plan/components/bridge-finder";
 import { PlanInkOrder } from "../../features/plan/components/plan-ink-order";
 import { PlanShare } from "../../features/plan/components/plan-share";
-import { moveInk, noRepeatsSideBySide, parsePlanInks, planToParams } from "../../features/plan/plan-state";
+import { moveInk, noRepeatsSideBySide, parseBridgeRequest, parsePlanInks, planToParams, planWithBridge } from "../../features/plan/plan-state";
 import { stashQueryOptions } from "../../features/stash/api/get-stash";
+
+function ChosenEnd({ ink, id, onClear }: { ink: Ink | undefined; id: number | null; onClear: () => void }) {
+  if (id === null) return null;
+  const name = ink?.name ?? `Ink #${id}`;
+  return (
+    <p className="flex items-center gap-2">
+      {ink && <ColourSwatch hex={ink.hex} className="h-8 w-10" />}
+      <span className="min-w-0 flex-1 leading-tight">
+        <span className="block font-bold">{name}</span>
+        {ink && <span className="block text-sm text-ink-soft">{ink.brand.name}</span>}
+      </span>
+      <button type="button" onClick={onClear} className="min-h-11 rounded-md px-2 text-ink-soft hover:bg-paper-shade" aria-label={`Clear ${name}`}>
+        <span aria-hidden="true" className="text-xl">×</span>
+      </button>
+    </p>
+  );
+}
 
 export default function PlanPage() {
   const [params, setParams] = useSearchParams();
@@ -20,8 +39,10 @@ export default function PlanPage() {
   const { data: me } = useMe();
   const stash = useQuery({ ...stashQueryOptions(), enabled: !!me });
   const stashIds = useMemo(() => new Set((stash.data ?? []).map((i) => i.ink.id)), [stash.data]);
-  const byId = useInksById(ids);
-  const inks = ids.map((id) => byId.get(id)).filter((i): i is Ink => !!i);
+  const bridge = useMemo(() => parseBridgeRequest(params), [params]);
+  const location = useLocation();
+  const byId = useInksById([...ids, ...(bridge.from ? [bridge.from] : []), ...(bridge.to ? [bridge.to] : [])]);
+  const inks = useMemo(() => ids.map((id) => byId.get(id)).filter((i): i is Ink => !!i), [ids, byId]);
   const loaded = inks.length === ids.length;
 
   const go = useCallback(
@@ -33,6 +54,23 @@ export default function PlanPage() {
     },
     [params, setParams],
   );
+  const setBridge = useCallback(
+    (changes: Record<string, string | null>) => {
+      const p = new URLSearchParams(params);
+      for (const [k, v] of Object.entries(changes)) {
+        if (v === null) p.delete(k);
+        else p.set(k, v);
+      }
+      setParams(p, { preventScrollReset: true, replace: true });
+    },
+    [params, setParams],
+  );
+  const bridgeHref = (first: Ink, second: Ink) => {
+    const p = new URLSearchParams(params);
+    p.set("from", String(first.id));
+    p.set("to", String(second.id));
+    return `/plan?${p.toString()}#bridges`;
+  };
 
   return (
     <>
@@ -80,10 +118,48 @@ export default function PlanPage() {
           ) : !loaded ? (
             <Loading label="Loading the inks…" />
           ) : (
-            <BlendPreview inks={inks} />
+            <BlendPreview inks={inks} bridgeHref={bridgeHref} />
           )}
         </section>
       </div>
+
+      <section id="bridges" aria-labelledby="bridges-title" className="mt-10 flex scroll-mt-24 flex-col gap-4 border-t border-rule pt-6">
+        <div>
+          <h2 id="bridges-title" className="text-2xl font-bold">
+            Bridge finder
+          </h2>
+          <p className="max-w-prose text-ink-soft">
+            Two inks that clash can still share a strip with “middle” inks between them. The finder tries every ink in the
+            catalogue as one, two or three inks between them, leaves out every muddy join, and ranks the bridges by their
+            largest step.
+          </p>
+        </div>
+        <BridgeFinder
+          viewerId={me?.id ?? null}
+          signInHref={`/sign-in?next=${encodeURIComponent(`${location.pathname}${location.search}`)}`}
+          request={bridge.request}
+          onOptions={(o) => setBridge({ bridgeInks: o.inks === "any" ? null : o.inks, sameBrand: o.sameBrand ? "true" : null })}
+          onUse={(bridgeIds) => {
+            const next = planWithBridge(ids, bridgeIds).slice(0, MAX_PLAN_INKS);
+            const p = planToParams(next);
+            for (const [k, v] of params) if (k !== "inks") p.append(k, v);
+            setParams(p);
+            window.scrollTo({ top: 0 });
+          }}
+          ends={
+            <>
+              <div className="flex flex-col gap-2">
+                <InkPicker label="From (first ink)" hint="" stashInkIds={stashIds} chosenIds={bridge.to ? [bridge.to] : []} chosenLabel="the other end" onPick={(ink) => setBridge({ from: String(ink.id) })} />
+                <ChosenEnd id={bridge.from} ink={bridge.from ? byId.get(bridge.from) : undefined} onClear={() => setBridge({ from: null })} />
+              </div>
+              <div className="flex flex-col gap-2">
+                <InkPicker label="To (last ink)" hint="" stashInkIds={stashIds} chosenIds={bridge.from ? [bridge.from] : []} chosenLabel="the other end" onPick={(ink) => setBridge({ to: String(ink.id) })} />
+                <ChosenEnd id={bridge.to} ink={bridge.to ? byId.get(bridge.to) : undefined} onClear={() => setBridge({ to: null })} />
+              </div>
+            </>
+          }
+        />
+      </section>
     </>
   );
 }

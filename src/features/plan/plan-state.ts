@@ -1,4 +1,5 @@
-import { MAX_PLAN_INKS } from "../../../shared/schemas/plan";
+import { MAX_PLAN_INKS, type BridgeInkChoice } from "../../../shared/schemas/plan";
+import type { BridgeRequest } from "./api/keys";
 
 const idPattern = /^[1-9]\d{0,9}$/;
 
@@ -40,4 +41,35 @@ export function moveInk(ids: readonly number[], from: number, step: -1 | 1): num
 /** True when no ink sits next to itself (moving can create that; the plan refuses it). */
 export function noRepeatsSideBySide(ids: readonly number[]): boolean {
   return ids.every((id, i) => i === 0 || ids[i - 1] !== id);
+}
+
+const bridgeChoices: readonly BridgeInkChoice[] = ["any", "stash", "oneToBuy"];
+
+/** The bridge finder's part of the address: `from`, `to`, `bridgeInks`, `sameBrand=true`. */
+export function parseBridgeRequest(params: URLSearchParams): { from: number | null; to: number | null; request: BridgeRequest | null } {
+  const id = (v: string | null) => (v !== null && idPattern.test(v) ? Number(v) : null);
+  const from = id(params.get("from"));
+  const to = id(params.get("to"));
+  const raw = params.get("bridgeInks");
+  const inks = bridgeChoices.find((c) => c === raw) ?? "any";
+  const sameBrand = params.get("sameBrand") === "true";
+  const request = from !== null && to !== null && from !== to ? { from, to, inks, sameBrand, limit: 5 } : null;
+  return { from, to, request };
+}
+
+/**
+ * A bridge put into the plan: when the plan already has the bridge's two ends side by side,
+ * the bridge's inks go between them; otherwise the bridge becomes the plan.
+ */
+export function planWithBridge(plan: readonly number[], bridge: readonly number[]): number[] {
+  const from = bridge[0]!;
+  const to = bridge[bridge.length - 1]!;
+  const middle = bridge.slice(1, -1);
+  for (let i = 1; i < plan.length; i++) {
+    const a = plan[i - 1]!;
+    const b = plan[i]!;
+    if (a === from && b === to) return [...plan.slice(0, i), ...middle, ...plan.slice(i)];
+    if (a === to && b === from) return [...plan.slice(0, i), ...[...middle].reverse(), ...plan.slice(i)];
+  }
+  return [...bridge];
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { moveInk, noRepeatsSideBySide, parsePlanInks, planToParams } from "../../../src/features/plan/plan-state";
+import { moveInk, noRepeatsSideBySide, parseBridgeRequest, parsePlanInks, planToParams, planWithBridge } from "../../../src/features/plan/plan-state";
 import { planInksParam } from "../../../shared/schemas/plan";
 
 describe("a plan's address", () => {
@@ -28,5 +28,20 @@ describe("a plan's address", () => {
     expect(planInksParam.safeParse("1,2,3,4,5,6,7").success).toBe(false);
     expect(planInksParam.safeParse("4,4").success).toBe(false);
     expect(planInksParam.safeParse("4;5").success).toBe(false);
+  });
+});
+
+describe("the bridge finder's address and a bridge put into the plan", () => {
+  it("reads the two ends and the options, and asks nothing until both ends differ", () => {
+    expect(parseBridgeRequest(new URLSearchParams("from=3&to=9&bridgeInks=oneToBuy&sameBrand=true")).request).toEqual({ from: 3, to: 9, inks: "oneToBuy", sameBrand: true, limit: 5 });
+    expect(parseBridgeRequest(new URLSearchParams("from=3&to=3")).request).toBeNull();
+    expect(parseBridgeRequest(new URLSearchParams("from=3&bridgeInks=everything")).request).toBeNull();
+    expect(parseBridgeRequest(new URLSearchParams("from=3&to=4&bridgeInks=everything")).request?.inks).toBe("any");
+  });
+
+  it("puts a bridge's inks between its two ends when the plan has them side by side, either way round", () => {
+    expect(planWithBridge([1, 2, 3], [2, 7, 8, 3])).toEqual([1, 2, 7, 8, 3]);
+    expect(planWithBridge([1, 3, 2], [2, 7, 8, 3])).toEqual([1, 3, 8, 7, 2]);
+    expect(planWithBridge([5, 6], [2, 7, 3])).toEqual([2, 7, 3]);
   });
 });

@@ -1,3 +1,4 @@
+import { Link } from "react-router";
 import type { Ink } from "../../../../shared/schemas/inks";
 import type { JoinFacts } from "../../../../shared/colour/joins";
 import { MUDDY_CHROMA_RATIO } from "../../../../shared/colour/joins";
@@ -42,7 +43,7 @@ export function JoinHints({ first, second, facts, bridgeHref }: JoinHintsProps) 
           weaker ink — below our line of {percent(MUDDY_CHROMA_RATIO)}. Put a bridge ink between them
           {bridgeHref ? (
             <>
-              : <a href={bridgeHref}>find a bridge</a>.
+              : <Link to={bridgeHref}>find a bridge</Link>.
             </>
           ) : (
             "."

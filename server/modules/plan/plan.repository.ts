@@ -1,0 +1,58 @@
+import { sql } from "kysely";
+import type { DbOrTx } from "../../db/client";
+
+export type CatalogueInkRow = {
+  id: number;
+  name: string;
+  brand_id: number;
+  brand: string;
+  hex: string;
+  lab_l: number;
+  lab_a: number;
+  lab_b: number;
+  discontinued: 0 | 1;
+};
+
+/** Changes whenever an ink is added, edited or removed: the bridge finder's cache key. */
+export async function catalogueVersion(db: DbOrTx): Promise<string> {
+  const row = await db
+    .selectFrom("inks")
+    .select((eb) => [eb.fn.countAll<number>().as("n"), eb.fn.max("id").as("top"), eb.fn.max("updated_at").as("at")])
+    .executeTakeFirst();
+  return `${row?.n ?? 0}:${row?.top ?? 0}:${row?.at ?? ""}`;
+}
+
+export function catalogueInks(db: DbOrTx): Promise<CatalogueInkRow[]> {
+  return db
+    .selectFrom("inks as i")
+    .innerJoin("brands as b", "b.id", "i.brand_id")
+    .select(["i.id", "i.name", "i.brand_id", "b.name as brand", "i.hex", "i.lab_l", "i.lab_a", "i.lab_b", "i.discontinued"])
+    .orderBy("i.id")
+    .execute();
+}
+
+export async function stashInkIds(db: DbOrTx, userId: string): Promise<number[]> {
+  const rows = await db.selectFrom("stash_items").select("ink_id").where("user_id", "=", userId).execute();
+  return rows.map((r) => r.ink_id);
+}
+
+/**
+ * For each pair of inks (either order), how many published strips have them side by side in
+ * their ink order.
+ */
+export async function besideCounts(db: DbOrTx, pairs: [number, number][]): Promise<Map<string, number>> {
+  const out = new Map<string, number>();
+  if (!pairs.length) return out;
+  const result = await sql<{ a: number; b: number; n: number }>`
+    with p (a, b) as (select value ->> 0, value ->> 1 from json_each(${JSON.stringify(pairs)}))
+    select p.a, p.b, count(distinct x.strip_id) as n
+    from p
+    join strip_inks x on x.ink_id = p.a
+    join strip_inks y on y.strip_id = x.strip_id and y.ink_id = p.b and abs(y.position - x.position) = 1
+    join strips s on s.id = x.strip_id and s.status = 'published'
+    group by p.a, p.b`.execute(db);
+  for (const r of result.rows) out.set(pairKey(r.a, r.b), Number(r.n));
+  return out;
+}
+
+export const pairKey = (a: number, b: number) => (a < b ? `${a}-${b}` : `${b}-${a}`);

@@ -1,0 +1,124 @@
+// The bridge finder over HTTP (GET /api/bridges) on the real app with the demo catalogue. Each
+// answer is checked against the rules it must keep (ends included, no muddy step, best first,
+// options honoured) and against brute-force enumeration over the same catalogue.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { deltaE2000, type Lab } from "../../shared/colour";
+import { joinFacts } from "../../shared/colour/joins";
+import type { BridgeList } from "../../shared/schemas/plan";
+import { bruteForceBridges, buildJoinMatrix } from "../../server/modules/plan/bridge-search";
+import { createTestApp, DEMO, signedIn, type TestApp } from "../setup/test-app";
+
+type Row = { id: number; name: string; brand_id: number; brand: string; lab: Lab; discontinued: number };
+
+let t: TestApp;
+let inks: Row[];
+const byName = (name: string) => inks.find((i) => i.name === name)!;
+
+beforeAll(async () => {
+  t = await createTestApp();
+  inks = (
+    await t.db
+      .selectFrom("inks as i")
+      .innerJoin("brands as b", "b.id", "i.brand_id")
+      .select(["i.id", "i.name", "i.brand_id", "b.name as brand", "i.lab_l", "i.lab_a", "i.lab_b", "i.discontinued"])
+      .orderBy("i.id")
+      .execute()
+  ).map((r) => ({ id: r.id, name: r.name, brand_id: r.brand_id, brand: r.brand, lab: { l: r.lab_l, a: r.lab_a, b: r.lab_b }, discontinued: r.discontinued }));
+});
+afterAll(async () => {
+  await t?.close();
+});
+
+function expectWellFormed(list: BridgeList, fromId: number, toId: number) {
+  for (const b of list.bridges) {
+    expect(b.inks[0]!.id).toBe(fromId);
+    expect(b.inks[b.inks.length - 1]!.id).toBe(toId);
+    expect(b.inks.length).toBeGreaterThanOrEqual(3);
+    expect(b.inks.length).toBeLessThanOrEqual(5);
+    expect(b.steps).toHaveLength(b.inks.length - 1);
+    expect(new Set(b.inks.map((i) => i.id)).size).toBe(b.inks.length);
+    for (const [i, s] of b.steps.entries()) {
+      const a = byName(b.inks[i]!.name).lab;
+      const c = byName(b.inks[i + 1]!.name).lab;
+      expect(s.muddy).toBe(false);
+      expect(joinFacts(a, c).muddy).toBe(false);
+      expect(s.deltaE).toBeCloseTo(deltaE2000(a, c), 2);
+    }
+    expect(b.maxStepDeltaE).toBeCloseTo(Math.max(...b.steps.map((s) => s.deltaE)), 1);
+  }
+  for (let i = 1; i < list.bridges.length; i++) expect(list.bridges[i]!.maxStepDeltaE).toBeGreaterThanOrEqual(list.bridges[i - 1]!.maxStepDeltaE);
+}
+
+describe("GET /api/bridges", () => {
+  it("bridges a muddy join (purple into yellow) with the same bridges a brute-force search finds", async () => {
+    const from = byName("Amethyst Geode");
+    const to = byName("Lemon Curd");
+    const res = await t.client().get(`/api/bridges?from=${from.id}&to=${to.id}&inks=any&limit=5`).expect(200);
+    const list = res.body as BridgeList;
+    expect(list.direct.muddy).toBe(true);
+    expect(list.bridges).toHaveLength(5);
+    expectWellFormed(list, from.id, to.id);
+    // Brute force over the same catalogue (discontinued inks are left out for a visitor).
+    const m = buildJoinMatrix(inks.map((i) => i.lab));
+    const idx = (id: number) => inks.findIndex((i) => i.id === id);
+    const expected = bruteForceBridges(m, { from: idx(from.id), to: idx(to.id), allowed: (i) => !inks[i]!.discontinued, k: 5 });
+    expect(list.bridges.map((b) => b.inks.map((i) => i.id))).toEqual(expected.map((b) => b.nodes.map((v) => inks[v]!.id)));
+  });
+
+  it("keeps to one brand when asked", async () => {
+    const from = byName("Amethyst Geode");
+    const to = byName("Lemon Curd");
+    const res = await t.client().get(`/api/bridges?from=${from.id}&to=${to.id}&sameBrand=true`).expect(200);
+    const list = res.body as BridgeList;
+    expect(list.bridges.length).toBeGreaterThan(0);
+    expectWellFormed(list, from.id, to.id);
+    const brands = new Set([from.brand, to.brand]);
+    for (const b of list.bridges) for (const ink of b.inks) expect(brands.has(ink.brand)).toBe(true);
+  });
+
+  it("asks a visitor to sign in for the stash options", async () => {
+    const res = await t.client().get(`/api/bridges?from=${byName("Amethyst Geode").id}&to=${byName("Lemon Curd").id}&inks=stash`).expect(401);
+    expect(res.body.error.code).toBe("sign_in_required");
+  });
+
+  it("uses only a member's own inks, or names the one ink to buy", async () => {
+    const agent = await signedIn(t, DEMO.member);
+    const from = byName("Amethyst Geode");
+    const to = byName("Lemon Curd");
+    const own = ["Lavender Shortbread", "Hawthorn Blossom", "Rhubarb Fool", "Apricot Glaze", "Custard Tart", "Foxglove Bell", "Saffron Bun"].map(byName);
+    await agent
+      .put("/api/stash")
+      .send({ items: [...own, from, to].map((i) => ({ inkId: i.id })) })
+      .expect(200);
+    const owned = new Set([...own, from, to].map((i) => i.id));
+    const stash = (await agent.get(`/api/bridges?from=${from.id}&to=${to.id}&inks=stash`).expect(200)).body as BridgeList;
+    expect(stash.bridges.length).toBeGreaterThan(0);
+    expectWellFormed(stash, from.id, to.id);
+    for (const b of stash.bridges) for (const ink of b.inks) expect(owned.has(ink.id)).toBe(true);
+
+    const buy = (await agent.get(`/api/bridges?from=${from.id}&to=${to.id}&inks=oneToBuy`).expect(200)).body as BridgeList;
+    expect(buy.bridges).toHaveLength(5);
+    expectWellFormed(buy, from.id, to.id);
+    for (const b of buy.bridges) {
+      const notOwned = b.inks.filter((i) => !owned.has(i.id));
+      expect(notOwned.length).toBeLessThanOrEqual(1);
+      expect(b.toBuy?.id ?? null).toBe(notOwned[0]?.id ?? null);
+    }
+    // One ink to buy can only do as well as or better than none.
+    expect(buy.bridges[0]!.maxStepDeltaE).toBeLessThanOrEqual(stash.bridges[0]!.maxStepDeltaE);
+  });
+
+  it.each([
+    ["the same ink twice", "from=5&to=5", 400],
+    ["no ink to bridge to", "from=5", 400],
+    ["a word for an id", "from=abc&to=5", 400],
+    ["too many bridges", "from=5&to=6&limit=50", 400],
+    ["an unknown option", "from=5&to=6&inks=all", 400],
+    ["a parameter given twice", "from=5&from=7&to=6", 400],
+    ["an unknown parameter", "from=5&to=6&colour=red", 400],
+    ["an ink not in the catalogue", "from=5&to=999999", 422],
+  ])("refuses %s with a clear error", async (_what, query, status) => {
+    const res = await t.client().get(`/api/bridges?${query}`).expect(status);
+    expect(res.body.error.message).toMatch(/\w/);
+  });
+});

@@ -80,3 +80,18 @@ export type BridgeList = {
   /** Inks the search looked through (after the options). */
   searched: number;
 };
+
+export const besideQuery = z.strictObject({
+  limit: single(z.coerce.number({ error: "must be a number" }).int("must be a whole number").min(1, "must be at least 1").max(24, "must be at most 24").default(8)),
+});
+
+/** An ink often blended directly next to another, from published strips. */
+export type BesideInk = {
+  ink: PlanInk;
+  /** Published strips with the two side by side. */
+  strips: number;
+  /** A few of those strips, newest first. */
+  examples: { id: number; title: string }[];
+};
+
+export type BesideList = { inkId: number; items: BesideInk[] };

@@ -122,3 +122,67 @@ describe("GET /api/bridges", () => {
     expect(res.body.error.message).toMatch(/\w/);
   });
 });
+
+describe("what goes with an ink, and inks next to each other in search", () => {
+  let n = 0;
+  async function insertStrip(inkIds: number[], status: "published" | "pending", title: string) {
+    n++;
+    const author = (await t.db.selectFrom("profiles").select("user_id").executeTakeFirstOrThrow()).user_id;
+    const at = new Date(Date.UTC(2026, 5, 1) + n * 3_600_000).toISOString();
+    const upload = `plan-test-${n}`;
+    await t.db.insertInto("uploads").values({ id: upload, owner_id: author, status: "ready", original_key: null, mime: "image/webp", byte_size: 1, white_x: null, white_y: null, analysis_json: null, display_key: null, thumb_key: null, placeholder: null, phash: null, width: 1200, height: 300, error_code: null, error_message: null, created_at: at, updated_at: at }).execute();
+    const { id } = await t.db
+      .insertInto("strips")
+      .values({ author_id: author, upload_id: upload, title, notes_html: "", paper: "smooth-cardstock", tools_json: "[]", video_url: null, status, status_reason: null, orientation: "horizontal", ink_count: inkIds.length, saves: 0, phash: null, created_at: at, updated_at: at, published_at: status === "published" ? at : null, hold: null, duplicate_of: null })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    await t.db.insertInto("strip_inks").values(inkIds.map((ink_id, position) => ({ strip_id: id, position, ink_id }))).execute();
+    return id;
+  }
+
+  let A: Row, B: Row, C: Row;
+  const ids: Record<string, number> = {};
+  beforeAll(async () => {
+    [A, B, C] = [byName("Gorse Bloom"), byName("Rain Barrel"), byName("Heather Moor")];
+    ids.abc = await insertStrip([A.id, B.id, C.id], "published", "A B C");
+    ids.ba = await insertStrip([B.id, A.id], "published", "B A");
+    ids.acb = await insertStrip([A.id, C.id, B.id], "published", "A C B");
+    ids.pending = await insertStrip([A.id, B.id], "pending", "A B waiting");
+  });
+
+  it("counts the inks published strips put directly next to an ink, with example strips, newest first", async () => {
+    const res = await t.client().get(`/api/inks/${A.id}/beside`).expect(200);
+    expect(res.body.items).toEqual([
+      { ink: { id: B.id, name: B.name, brand: B.brand, hex: expect.any(String) }, strips: 2, examples: [{ id: ids.ba, title: "B A" }, { id: ids.abc, title: "A B C" }] },
+      { ink: { id: C.id, name: C.name, brand: C.brand, hex: expect.any(String) }, strips: 1, examples: [{ id: ids.acb, title: "A C B" }] },
+    ]);
+    // A strip waiting for review never counts.
+    expect(JSON.stringify(res.body)).not.toContain("waiting");
+  });
+
+  it("says so for an unknown ink and refuses a bad limit", async () => {
+    await t.client().get(`/api/inks/999999/beside`).expect(404);
+    await t.client().get(`/api/inks/${A.id}/beside?limit=500`).expect(400);
+  });
+
+  it("finds strips with two inks anywhere, or only side by side (adjacent=true)", async () => {
+    const anywhere = await t.client().get(`/api/strips?ink=${A.id}&ink=${B.id}`).expect(200);
+    expect(anywhere.body.items.map((s: { id: number }) => s.id).sort()).toEqual([ids.abc, ids.ba, ids.acb].sort());
+    const beside = await t.client().get(`/api/strips?ink=${A.id}&ink=${B.id}&adjacent=true`).expect(200);
+    expect(beside.body.items.map((s: { id: number }) => s.id).sort()).toEqual([ids.abc, ids.ba].sort());
+    expect(beside.body.total).toBe(2);
+    const other = await t.client().get(`/api/strips?ink=${C.id}&ink=${B.id}&adjacent=true`).expect(200);
+    expect(other.body.items.map((s: { id: number }) => s.id).sort()).toEqual([ids.abc, ids.acb].sort());
+  });
+
+  it("refuses next to each other without exactly two inks", async () => {
+    const res = await t.client().get(`/api/strips?ink=${A.id}&adjacent=true`).expect(400);
+    expect(res.body.error.fields.adjacent[0]).toMatch(/exactly two inks/);
+    await t.client().get(`/api/strips?ink=${A.id}&ink=${B.id}&adjacent=maybe`).expect(400);
+  });
+
+  it("counts a bridge's joins in published strips", async () => {
+    const res = await t.client().get(`/api/bridges?from=${A.id}&to=${B.id}`).expect(200);
+    expect(res.body.direct.strips).toBe(2);
+  });
+});

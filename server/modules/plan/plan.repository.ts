@@ -56,3 +56,41 @@ export async function besideCounts(db: DbOrTx, pairs: [number, number][]): Promi
 }
 
 export const pairKey = (a: number, b: number) => (a < b ? `${a}-${b}` : `${b}-${a}`);
+
+export type BesideRow = { ink_id: number; n: number };
+
+/** The inks most often directly next to this one in published strips, most strips first. */
+export async function inksBeside(db: DbOrTx, inkId: number, limit: number): Promise<BesideRow[]> {
+  const result = await sql<BesideRow>`
+    select nb.ink_id, count(*) as n
+    from strip_inks a
+    join strip_inks nb on nb.strip_id = a.strip_id and abs(nb.position - a.position) = 1
+    join strips s on s.id = a.strip_id and s.status = 'published'
+    where a.ink_id = ${inkId}
+    group by nb.ink_id
+    order by n desc, nb.ink_id
+    limit ${limit}`.execute(db);
+  return result.rows.map((r) => ({ ink_id: r.ink_id, n: Number(r.n) }));
+}
+
+export type BesideExample = { neighbour: number; id: number; title: string };
+
+/** Up to `per` newest published strips with the ink beside each of these neighbours. */
+export async function besideExamples(db: DbOrTx, inkId: number, neighbours: number[], per: number): Promise<BesideExample[]> {
+  if (!neighbours.length) return [];
+  const result = await sql<BesideExample>`
+    select neighbour, id, title from (
+      select nb.ink_id as neighbour, s.id, s.title,
+        row_number() over (partition by nb.ink_id order by s.published_at desc, s.id desc) as rn
+      from strip_inks a
+      join strip_inks nb on nb.strip_id = a.strip_id and abs(nb.position - a.position) = 1
+      join strips s on s.id = a.strip_id and s.status = 'published'
+      where a.ink_id = ${inkId} and nb.ink_id in (select value from json_each(${JSON.stringify(neighbours)}))
+    ) where rn <= ${per}
+    order by neighbour, rn`.execute(db);
+  return result.rows;
+}
+
+export async function inkExists(db: DbOrTx, inkId: number): Promise<boolean> {
+  return !!(await db.selectFrom("inks").select("id").where("id", "=", inkId).executeTakeFirst());
+}

@@ -1,9 +1,10 @@
 import { Router } from "express";
-import { bridgeQuery } from "../../../shared/schemas/plan";
+import { idParams } from "../../../shared/schemas/common";
+import { besideQuery, bridgeQuery } from "../../../shared/schemas/plan";
 import { validate } from "../../middleware/validate";
 import type { BridgeOptions, PlanService } from "./plan.service";
 
-/** GET /bridges (mounted under /api). */
+/** GET /bridges and GET /inks/:id/beside (mounted under /api). */
 export function planRouter(plan: PlanService): Router {
   const router = Router();
   router.get("/bridges", validate({ query: bridgeQuery }), async (req, res) => {
@@ -11,6 +12,10 @@ export function planRouter(plan: PlanService): Router {
     const q = req.query as unknown as BridgeOptions;
     if (q.inks !== "any") res.set("Cache-Control", "private, no-store");
     res.json(await plan.findBridges(q, user?.id ?? null));
+  });
+  router.get("/inks/:id/beside", validate({ params: idParams, query: besideQuery }), async (req, res) => {
+    const q = req.query as unknown as { limit: number };
+    res.json(await plan.inksBeside(Number(req.params.id), q.limit));
   });
   return router;
 }

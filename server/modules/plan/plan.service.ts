@@ -1,10 +1,10 @@
 import { describeDeltaE, type Lab } from "../../../shared/colour";
 import { joinFacts } from "../../../shared/colour/joins";
-import type { Bridge, BridgeList, BridgeStep, PlanInk } from "../../../shared/schemas/plan";
+import type { BesideList, Bridge, BridgeList, BridgeStep, PlanInk } from "../../../shared/schemas/plan";
 import type { z } from "zod";
 import type { bridgeQuery } from "../../../shared/schemas/plan";
 import type { Db } from "../../db/client";
-import { AppError } from "../../middleware/errors";
+import { AppError, notFound } from "../../middleware/errors";
 import { buildJoinMatrix, findBestBridges, type BridgeQuery, type JoinMatrix } from "./bridge-search";
 import * as repo from "./plan.repository";
 
@@ -94,7 +94,21 @@ export function createPlanService(deps: { db: Db }) {
     return { bridges, direct: step(from, to), searched };
   }
 
-  return { findBridges, catalogue };
+  /** What the community blends directly next to an ink: neighbours by count, with example strips. */
+  async function inksBeside(inkId: number, limit: number): Promise<BesideList> {
+    if (!(await repo.inkExists(db, inkId))) throw notFound("That ink");
+    const rows = await repo.inksBeside(db, inkId, limit);
+    const cat = await catalogue();
+    const examples = await repo.besideExamples(db, inkId, rows.map((r) => r.ink_id), 3);
+    const items = rows.flatMap((r) => {
+      const i = cat.indexOf.get(r.ink_id);
+      if (i === undefined) return [];
+      return [{ ink: planInk(cat.inks[i]!), strips: r.n, examples: examples.filter((e) => e.neighbour === r.ink_id).map((e) => ({ id: e.id, title: e.title })) }];
+    });
+    return { inkId, items };
+  }
+
+  return { findBridges, inksBeside, catalogue };
 }
 
 export type PlanService = ReturnType<typeof createPlanService>;

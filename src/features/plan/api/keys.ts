@@ -7,4 +7,5 @@ export const planKeys = {
   all: ["plan"] as const,
   bridges: () => [...planKeys.all, "bridges"] as const,
   bridgeList: (q: BridgeRequest, viewerId: string | null) => [...planKeys.bridges(), q, viewerId] as const,
+  beside: (inkId: number) => [...planKeys.all, "beside", inkId] as const,
 };

@@ -95,3 +95,12 @@ export type BesideInk = {
 };
 
 export type BesideList = { inkId: number; items: BesideInk[] };
+
+export const sheetPapers = ["a4", "letter"] as const;
+const paperParam = single(z.enum(sheetPapers, { error: "must be a4 or letter" }).default("a4"));
+
+/** GET /api/plan/card.pdf: a practice card for a plan. */
+export const practiceCardQuery = z.strictObject({ inks: single(planInksParam), paper: paperParam });
+
+/** GET /api/stash/chart.pdf: the signed-in member's stash chart. */
+export const stashChartQuery = z.strictObject({ paper: paperParam });

@@ -186,3 +186,54 @@ describe("what goes with an ink, and inks next to each other in search", () => {
     expect(res.body.direct.strips).toBe(2);
   });
 });
+
+describe("printable sheets (PDF)", () => {
+  async function pdfText(buf: Buffer) {
+    const { PDFParse } = await import("pdf-parse");
+    const parser = new PDFParse({ data: new Uint8Array(buf) });
+    const result = await parser.getText();
+    await parser.destroy();
+    return { pages: result.total, text: result.text.replace(/\s+/g, " ") };
+  }
+  const binary = (res: import("supertest").Response, cb: (err: Error | null, body: Buffer) => void) => {
+    const chunks: Buffer[] = [];
+    res.on("data", (c: Buffer) => chunks.push(c));
+    res.on("end", () => cb(null, Buffer.concat(chunks)));
+  };
+
+  it("prints a practice card: the ink order, the join hints and the page size asked for", async () => {
+    const plan = ["Lemon Curd", "Amethyst Geode", "Cobalt Lantern", "Polar Night"].map(byName);
+    const res = await t.client().get(`/api/plan/card.pdf?inks=${plan.map((i) => i.id).join(",")}&paper=letter`).buffer(true).parse(binary).expect(200);
+    expect(res.headers["content-type"]).toBe("application/pdf");
+    expect(res.headers["content-disposition"]).toMatch(/attachment; filename="blendwell-practice-card-letter\.pdf"/);
+    const body = res.body as Buffer;
+    // US Letter is 612 × 792 points (ANSI/ASME Y14.1), A4 595.28 × 841.89 (ISO 216).
+    expect(body.toString("latin1")).toMatch(/\/MediaBox \[0 0 612 792\]/);
+    const { pages, text } = await pdfText(body);
+    expect(pages).toBe(1);
+    for (const ink of plan) expect(text).toContain(ink.name);
+    expect(text).toContain("MUDDY JOIN");
+    expect(text).toContain("TAKEOVER");
+    expect(text).toContain("Swatch each ink in its box");
+    const a4 = await t.client().get(`/api/plan/card.pdf?inks=${plan[0]!.id},${plan[1]!.id}`).buffer(true).parse(binary).expect(200);
+    expect((a4.body as Buffer).toString("latin1")).toMatch(/\/MediaBox \[0 0 595\.28 841\.89\]/);
+  });
+
+  it("refuses a plan it cannot print, with a clear error", async () => {
+    expect((await t.client().get(`/api/plan/card.pdf?inks=${byName("Lemon Curd").id}`).expect(400)).body.error.fields.inks[0]).toMatch(/at least 2/);
+    await t.client().get(`/api/plan/card.pdf?inks=1,999999`).expect(422);
+    await t.client().get(`/api/plan/card.pdf?inks=1,2&paper=a3`).expect(400);
+  });
+
+  it("prints a member's stash chart with every ink named, over as many pages as it needs; visitors are asked to sign in", async () => {
+    await t.client().get("/api/stash/chart.pdf").expect(401);
+    const agent = await signedIn(t, DEMO.newMember);
+    const owned = inks.slice(0, 60);
+    await agent.put("/api/stash").send({ items: owned.map((i) => ({ inkId: i.id })) }).expect(200);
+    const res = await agent.get("/api/stash/chart.pdf?paper=a4").buffer(true).parse(binary).expect(200);
+    const { pages, text } = await pdfText(res.body as Buffer);
+    expect(pages).toBeGreaterThan(1);
+    for (const ink of owned) expect(text).toContain(ink.name);
+    expect(text).toMatch(/60 inks, grouped by hue/);
+  });
+});

@@ -94,3 +94,17 @@ export async function besideExamples(db: DbOrTx, inkId: number, neighbours: numb
 export async function inkExists(db: DbOrTx, inkId: number): Promise<boolean> {
   return !!(await db.selectFrom("inks").select("id").where("id", "=", inkId).executeTakeFirst());
 }
+
+/** The member's stash with each ink's colour, and the member's name. */
+export async function stashForChart(db: DbOrTx, userId: string) {
+  const inks = await db
+    .selectFrom("stash_items as s")
+    .innerJoin("inks as i", "i.id", "s.ink_id")
+    .innerJoin("brands as b", "b.id", "i.brand_id")
+    .select(["i.id", "i.name", "b.name as brand", "i.hex", "i.lab_l", "i.lab_a", "i.lab_b"])
+    .where("s.user_id", "=", userId)
+    .orderBy("i.name")
+    .execute();
+  const profile = await db.selectFrom("profiles").select("name").where("user_id", "=", userId).executeTakeFirst();
+  return { name: profile?.name ?? "", inks };
+}

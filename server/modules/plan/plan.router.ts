@@ -1,10 +1,11 @@
 import { Router } from "express";
 import { idParams } from "../../../shared/schemas/common";
-import { besideQuery, bridgeQuery } from "../../../shared/schemas/plan";
+import { besideQuery, bridgeQuery, practiceCardQuery, stashChartQuery } from "../../../shared/schemas/plan";
+import { requireUser } from "../../auth/current-user";
 import { validate } from "../../middleware/validate";
 import type { BridgeOptions, PlanService } from "./plan.service";
 
-/** GET /bridges and GET /inks/:id/beside (mounted under /api). */
+/** GET /bridges, /inks/:id/beside, /plan/card.pdf and /stash/chart.pdf (mounted under /api). */
 export function planRouter(plan: PlanService): Router {
   const router = Router();
   router.get("/bridges", validate({ query: bridgeQuery }), async (req, res) => {
@@ -16,6 +17,21 @@ export function planRouter(plan: PlanService): Router {
   router.get("/inks/:id/beside", validate({ params: idParams, query: besideQuery }), async (req, res) => {
     const q = req.query as unknown as { limit: number };
     res.json(await plan.inksBeside(Number(req.params.id), q.limit));
+  });
+  router.get("/plan/card.pdf", validate({ query: practiceCardQuery }), async (req, res) => {
+    const q = req.query as unknown as { inks: number[]; paper: "a4" | "letter" };
+    const pdf = await plan.practiceCard(q.inks, q.paper);
+    res.type("application/pdf").set("Content-Disposition", `attachment; filename="blendwell-practice-card-${q.paper}.pdf"`).send(pdf);
+  });
+
+  router.get("/stash/chart.pdf", requireUser, validate({ query: stashChartQuery }), async (req, res) => {
+    const q = req.query as unknown as { paper: "a4" | "letter" };
+    const pdf = await plan.stashChart(res.locals.user!.id, q.paper);
+    res
+      .type("application/pdf")
+      .set("Cache-Control", "private, no-store")
+      .set("Content-Disposition", `attachment; filename="blendwell-stash-chart-${q.paper}.pdf"`)
+      .send(pdf);
   });
   return router;
 }

@@ -7,6 +7,7 @@ import type { Db } from "../../db/client";
 import { AppError, notFound } from "../../middleware/errors";
 import { buildJoinMatrix, findBestBridges, type BridgeQuery, type JoinMatrix } from "./bridge-search";
 import * as repo from "./plan.repository";
+import { practiceCardPdf, stashChartPdf, type PaperSize, type SheetInk } from "./sheets";
 
 export type BridgeOptions = z.output<typeof bridgeQuery>;
 
@@ -108,7 +109,29 @@ export function createPlanService(deps: { db: Db }) {
     return { inkId, items };
   }
 
-  return { findBridges, inksBeside, catalogue };
+  /** A practice card (PDF) for inks in order; every ink must be in the catalogue. */
+  async function practiceCard(inkIds: number[], paper: PaperSize): Promise<Buffer> {
+    const cat = await catalogue();
+    const missing = inkIds.filter((id) => !cat.indexOf.has(id));
+    if (missing.length) throw new AppError("unknown_inks", "Some inks of this plan are not in the catalogue.", 422, { inks: [`unknown ink id${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}`] });
+    const inks: SheetInk[] = inkIds.map((id) => {
+      const i = cat.indexOf.get(id)!;
+      return { ...planInk(cat.inks[i]!), lab: cat.labs[i]! };
+    });
+    return practiceCardPdf(inks, paper);
+  }
+
+  /** The member's stash chart (PDF). */
+  async function stashChart(userId: string, paper: PaperSize): Promise<Buffer> {
+    const { name, inks } = await repo.stashForChart(db, userId);
+    return stashChartPdf(
+      name,
+      inks.map((r) => ({ id: r.id, name: r.name, brand: r.brand, hex: r.hex, lab: { l: r.lab_l, a: r.lab_a, b: r.lab_b } })),
+      paper,
+    );
+  }
+
+  return { findBridges, inksBeside, practiceCard, stashChart, catalogue };
 }
 
 export type PlanService = ReturnType<typeof createPlanService>;

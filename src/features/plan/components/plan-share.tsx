@@ -1,5 +1,6 @@
 import { useState } from "react";
 import { Button } from "../../../components/ui/button";
+import { PrintLinks } from "./print-links";
 
 /** The plan's own address, to copy and share. */
 export function PlanShare({ ids }: { ids: readonly number[] }) {
@@ -26,6 +27,7 @@ export function PlanShare({ ids }: { ids: readonly number[] }) {
       <p role="status" className="text-sm text-ink-soft">
         {copied === "yes" ? "Link copied." : copied === "failed" ? "Could not copy: select the link above and copy it." : ""}
       </p>
+      <PrintLinks href={`/api/plan/card.pdf?inks=${ids.join(",")}`} what="a practice card" />
     </div>
   );
 }

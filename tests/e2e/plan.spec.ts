@@ -71,6 +71,13 @@ test("a visitor plans a blend, sees a muddy join and a takeover, bridges it and 
   for (const name of names) expect(pdf.text).toContain(name);
   expect(pdf.text).toContain("Swatch each ink in its box");
 
+  // A link naming an ink the catalogue does not have says so and offers to leave it out.
+  await page.goto(`/plan?inks=${lemon.id},999999,${cobalt.id}`);
+  await expect(page.getByRole("region", { name: "Blend preview" }).getByRole("alert")).toContainText("Ink #999999 is not in the catalogue.");
+  await page.getByRole("button", { name: "Leave it out" }).click();
+  await expect(page).toHaveURL(new RegExp(`inks=${lemon.id}%2C${cobalt.id}$`));
+  await expect(page.getByTestId("plan-summary")).toHaveText(/^One join/);
+
   await page.setViewportSize({ width: 390, height: 844 });
   await page.goto(link);
   await expect(page.getByTestId("plan-summary")).toBeVisible();

@@ -1,4 +1,4 @@
-import { useQuery } from "@tanstack/react-query";
+import { useQueries, useQuery } from "@tanstack/react-query";
 import { useCallback, useMemo } from "react";
 import { Link, useLocation, useSearchParams } from "react-router";
 import type { Ink } from "../../../shared/schemas/inks";
@@ -7,7 +7,11 @@ import { ColourSwatch } from "../../components/ui/colour-swatch";
 import { Loading } from "../../components/ui/loading";
 import { PageHeader } from "../../components/ui/page-header";
 import { useMe } from "../../features/accounts/api/get-me";
+import { inkQueryOptions } from "../../features/inks/api/get-ink";
 import { useInksById } from "../../features/inks/api/get-inks-by-id";
+import { Notice } from "../../components/ui/notice";
+import { Button } from "../../components/ui/button";
+import { errorMessage, isApiError } from "../../lib/api-client";
 import { InkPicker } from "../../features/inks/components/ink-picker";
 import { BlendPreview } from "../../features/plan/components/blend-preview";
 import { BridgeFinder } from "../../features/plan/components/bridge-finder";
@@ -44,6 +48,11 @@ export default function PlanPage() {
   const byId = useInksById([...ids, ...(bridge.from ? [bridge.from] : []), ...(bridge.to ? [bridge.to] : [])]);
   const inks = useMemo(() => ids.map((id) => byId.get(id)).filter((i): i is Ink => !!i), [ids, byId]);
   const loaded = inks.length === ids.length;
+  // Inks of the address that could not be loaded: gone from the catalogue (404) or a failed request.
+  const failed = useQueries({
+    queries: ids.map((id) => ({ ...inkQueryOptions(id), staleTime: 5 * 60_000, meta: { errorsShownInline: true } })),
+    combine: (results) => results.flatMap((r, i) => (r.isError ? [{ id: ids[i]!, error: r.error, retry: r.refetch }] : [])),
+  });
 
   const go = useCallback(
     (next: number[]) => {
@@ -115,6 +124,22 @@ export default function PlanPage() {
               Add {ids.length === 0 ? "two inks" : "one more ink"} to see the strip. Not sure where to start? Pick an ink and
               see <Link to="/inks">what others blend next to it</Link> on its page.
             </p>
+          ) : failed.length > 0 ? (
+            <Notice tone="error" title="This plan could not be shown" live>
+              {failed.map((f) => (
+                <p key={f.id}>
+                  {isApiError(f.error) && f.error.status === 404 ? `Ink #${f.id} is not in the catalogue.` : `Ink #${f.id} could not be loaded: ${errorMessage(f.error)}`}
+                </p>
+              ))}
+              <div className="mt-3 flex flex-wrap gap-2">
+                <Button variant="secondary" onClick={() => go(ids.filter((id) => !failed.some((f) => f.id === id)))}>
+                  Leave {failed.length === 1 ? "it" : "them"} out
+                </Button>
+                <Button variant="quiet" onClick={() => failed.forEach((f) => void f.retry())}>
+                  Try again
+                </Button>
+              </div>
+            </Notice>
           ) : !loaded ? (
             <Loading label="Loading the inks…" />
           ) : (

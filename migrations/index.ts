@@ -6,6 +6,7 @@ import * as m0004 from "./20261202_0004_strips";
 import * as m0005 from "./20261202_0005_moderation";
 import * as m0006 from "./20261202_0006_search_index";
 import * as m0007 from "./20261202_0007_binders_and_stash";
+import * as m0008 from "./20261203_0008_binder_plans";
 
 // Every migration, by name (the names sort in the order they run). Add new files here;
 // never edit one that has run.
@@ -17,4 +18,5 @@ export const migrations: Record<string, Migration> = {
   "20261202_0005_moderation": m0005,
   "20261202_0006_search_index": m0006,
   "20261202_0007_binders_and_stash": m0007,
+  "20261203_0008_binder_plans": m0008,
 };

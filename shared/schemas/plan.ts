@@ -104,3 +104,20 @@ export const practiceCardQuery = z.strictObject({ inks: single(planInksParam), p
 
 /** GET /api/stash/chart.pdf: the signed-in member's stash chart. */
 export const stashChartQuery = z.strictObject({ paper: paperParam });
+
+/** A binder holds at most this many planned strips. */
+export const MAX_BINDER_PLANS = 200;
+
+/** POST /api/binders/:id/plans */
+export const binderPlanInput = z.strictObject({
+  inks: z
+    .array(z.number().int().positive("ink ids are positive").max(Number.MAX_SAFE_INTEGER))
+    .min(MIN_PLAN_INKS, `a plan needs at least ${MIN_PLAN_INKS} inks`)
+    .max(MAX_PLAN_INKS, `a plan takes at most ${MAX_PLAN_INKS} inks`)
+    .refine((ids) => ids.every((id, i) => i === 0 || ids[i - 1] !== id), "the same ink cannot sit next to itself"),
+});
+export const binderPlanParams = z.strictObject({ id: z.coerce.number().int().positive().max(Number.MAX_SAFE_INTEGER), planId: z.coerce.number().int().positive().max(Number.MAX_SAFE_INTEGER) });
+
+/** A planned strip saved in a binder. Inks removed from the catalogue since are left out of `inks`. */
+export type BinderPlan = { id: number; binderId: number; inkIds: number[]; inks: PlanInk[]; addedAt: string };
+export type BinderPlanList = { items: BinderPlan[]; canEdit: boolean };

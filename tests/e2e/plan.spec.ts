@@ -107,6 +107,17 @@ test("a member prints a stash chart and bridges from her own inks; an ink page l
     for (const name of await b.locator("ol > li > span.font-bold").allInnerTexts()) expect(owned.has(name)).toBe(true);
   }
 
+  // Keep a plan in a binder as a planned strip; the binder shows it.
+  await page.goto(`/plan?inks=${ends[0]!.id},${ends[1]!.id}`);
+  const binderName = await page.getByLabel("Keep this plan in a binder").locator("option").first().innerText();
+  await page.getByRole("button", { name: "Save as a planned strip" }).click();
+  await page.getByRole("status").getByRole("link", { name: binderName }).click();
+  const planned = page.getByTestId("binder-plan").first();
+  await expect(planned).toContainText(ends[0]!.name);
+  await expect(planned).toContainText(ends[1]!.name);
+  await planned.getByRole("button", { name: "Remove" }).click();
+  await expect(page.getByTestId("binder-plan")).toHaveCount(0);
+
   // An ink page: the inks most often blended next to it, from the demo's published strips.
   const strips = (await (await page.request.get("/api/strips?limit=1")).json()) as { items: { inks: { id: number; name: string }[] }[] };
   const [a, b] = strips.items[0]!.inks;

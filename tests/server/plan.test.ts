@@ -237,3 +237,37 @@ describe("printable sheets (PDF)", () => {
     expect(text).toMatch(/60 inks, grouped by hue/);
   });
 });
+
+describe("planned strips in a binder", () => {
+  it("saves a plan to the member's own binder, lists it, and removes it", async () => {
+    const agent = await signedIn(t, DEMO.member);
+    const binder = (await agent.post("/api/binders").send({ name: "Plans to try", visibility: "private" }).expect(201)).body as { id: number };
+    const inksOf = ["Lemon Curd", "Rhubarb Fool", "Amethyst Geode"].map(byName);
+    const saved = (await agent.post(`/api/binders/${binder.id}/plans`).send({ inks: inksOf.map((i) => i.id) }).expect(201)).body;
+    expect(saved.inks.map((i: { name: string }) => i.name)).toEqual(inksOf.map((i) => i.name));
+    const list = (await agent.get(`/api/binders/${binder.id}/plans`).expect(200)).body;
+    expect(list.canEdit).toBe(true);
+    expect(list.items.map((p: { id: number }) => p.id)).toEqual([saved.id]);
+    // A private binder's plans are nobody else's business: not found for a visitor.
+    await t.client().get(`/api/binders/${binder.id}/plans`).expect(404);
+    await agent.delete(`/api/binders/${binder.id}/plans/${saved.id}`).expect(204);
+    await agent.delete(`/api/binders/${binder.id}/plans/${saved.id}`).expect(404);
+    expect((await agent.get(`/api/binders/${binder.id}/plans`).expect(200)).body.items).toEqual([]);
+  });
+
+  it("refuses another member's binder, bad plans and unknown inks, and writes nothing", async () => {
+    const owner = await signedIn(t, DEMO.member);
+    const binder = (await owner.post("/api/binders").send({ name: "Public plans", visibility: "public" }).expect(201)).body as { id: number };
+    const other = await signedIn(t, DEMO.moderator);
+    const two = [byName("Lemon Curd").id, byName("Rhubarb Fool").id];
+    expect((await other.post(`/api/binders/${binder.id}/plans`).send({ inks: two }).expect(403)).body.error.code).toBe("forbidden");
+    await t.client().post(`/api/binders/${binder.id}/plans`).send({ inks: two }).expect(401);
+    await owner.post(`/api/binders/${binder.id}/plans`).send({ inks: [two[0]] }).expect(400);
+    await owner.post(`/api/binders/${binder.id}/plans`).send({ inks: [two[0], two[0]] }).expect(400);
+    await owner.post(`/api/binders/${binder.id}/plans`).send({ inks: "1,2" }).expect(400);
+    await owner.post(`/api/binders/${binder.id}/plans`).send({ inks: [two[0], 999999] }).expect(422);
+    await owner.post(`/api/binders/999999/plans`).send({ inks: two }).expect(404);
+    const list = (await other.get(`/api/binders/${binder.id}/plans`).expect(200)).body;
+    expect(list).toEqual({ items: [], canEdit: false });
+  });
+});

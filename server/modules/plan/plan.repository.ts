@@ -108,3 +108,25 @@ export async function stashForChart(db: DbOrTx, userId: string) {
   const profile = await db.selectFrom("profiles").select("name").where("user_id", "=", userId).executeTakeFirst();
   return { name: profile?.name ?? "", inks };
 }
+
+export function binderById(db: DbOrTx, id: number) {
+  return db.selectFrom("binders").select(["id", "owner_id", "visibility"]).where("id", "=", id).executeTakeFirst();
+}
+
+export function binderPlans(db: DbOrTx, binderId: number) {
+  return db.selectFrom("binder_plans").selectAll().where("binder_id", "=", binderId).orderBy("id", "desc").execute();
+}
+
+export async function countBinderPlans(db: DbOrTx, binderId: number): Promise<number> {
+  const row = await db.selectFrom("binder_plans").select((eb) => eb.fn.countAll<number>().as("n")).where("binder_id", "=", binderId).executeTakeFirst();
+  return Number(row?.n ?? 0);
+}
+
+export function insertBinderPlan(db: DbOrTx, binderId: number, inkIds: number[], at: string) {
+  return db.insertInto("binder_plans").values({ binder_id: binderId, ink_ids: JSON.stringify(inkIds), added_at: at }).returningAll().executeTakeFirstOrThrow();
+}
+
+export async function deleteBinderPlan(db: DbOrTx, binderId: number, planId: number): Promise<boolean> {
+  const r = await db.deleteFrom("binder_plans").where("binder_id", "=", binderId).where("id", "=", planId).executeTakeFirst();
+  return Number(r.numDeletedRows) > 0;
+}

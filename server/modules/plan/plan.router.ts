@@ -1,11 +1,11 @@
 import { Router } from "express";
 import { idParams } from "../../../shared/schemas/common";
-import { besideQuery, bridgeQuery, practiceCardQuery, stashChartQuery } from "../../../shared/schemas/plan";
+import { besideQuery, binderPlanInput, binderPlanParams, bridgeQuery, practiceCardQuery, stashChartQuery } from "../../../shared/schemas/plan";
 import { requireUser } from "../../auth/current-user";
 import { validate } from "../../middleware/validate";
 import type { BridgeOptions, PlanService } from "./plan.service";
 
-/** GET /bridges, /inks/:id/beside, /plan/card.pdf and /stash/chart.pdf (mounted under /api). */
+/** The planning routes, mounted under /api: bridges, inks beside an ink, printable sheets, planned strips in binders. */
 export function planRouter(plan: PlanService): Router {
   const router = Router();
   router.get("/bridges", validate({ query: bridgeQuery }), async (req, res) => {
@@ -32,6 +32,16 @@ export function planRouter(plan: PlanService): Router {
       .set("Cache-Control", "private, no-store")
       .set("Content-Disposition", `attachment; filename="blendwell-stash-chart-${q.paper}.pdf"`)
       .send(pdf);
+  });
+  router.get("/binders/:id/plans", validate({ params: idParams }), async (req, res) => {
+    res.set("Cache-Control", "no-store").json(await plan.binderPlans(Number(req.params.id), res.locals.user?.id ?? null));
+  });
+  router.post("/binders/:id/plans", requireUser, validate({ params: idParams, body: binderPlanInput }), async (req, res) => {
+    res.status(201).json(await plan.savePlan(res.locals.user!.id, Number(req.params.id), req.body.inks));
+  });
+  router.delete("/binders/:id/plans/:planId", requireUser, validate({ params: binderPlanParams }), async (req, res) => {
+    await plan.removePlan(res.locals.user!.id, Number(req.params.id), Number(req.params.planId));
+    res.status(204).end();
   });
   return router;
 }

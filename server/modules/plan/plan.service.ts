@@ -1,6 +1,7 @@
 import { describeDeltaE, type Lab } from "../../../shared/colour";
 import { joinFacts } from "../../../shared/colour/joins";
-import type { BesideList, Bridge, BridgeList, BridgeStep, PlanInk } from "../../../shared/schemas/plan";
+import { MAX_BINDER_PLANS, type BesideList, type BinderPlan, type BinderPlanList, type Bridge, type BridgeList, type BridgeStep, type PlanInk } from "../../../shared/schemas/plan";
+import { nowIso } from "../../db/client";
 import type { z } from "zod";
 import type { bridgeQuery } from "../../../shared/schemas/plan";
 import type { Db } from "../../db/client";
@@ -131,7 +132,51 @@ export function createPlanService(deps: { db: Db }) {
     );
   }
 
-  return { findBridges, inksBeside, practiceCard, stashChart, catalogue };
+  // Planned strips in binders. A private binder is not found by anyone but its owner.
+  async function visibleBinder(binderId: number, viewerId: string | null) {
+    const b = await repo.binderById(db, binderId);
+    if (!b || (b.visibility === "private" && b.owner_id !== viewerId)) throw notFound("That binder");
+    return b;
+  }
+
+  async function ownBinder(binderId: number, userId: string) {
+    const b = await visibleBinder(binderId, userId);
+    if (b.owner_id !== userId) throw new AppError("forbidden", "Only the owner can change this binder.", 403);
+    return b;
+  }
+
+  function toBinderPlan(cat: Catalogue, row: { id: number; binder_id: number; ink_ids: string; added_at: string }): BinderPlan {
+    const inkIds = (JSON.parse(row.ink_ids) as number[]).filter((id) => Number.isSafeInteger(id));
+    const inks = inkIds.flatMap((id) => {
+      const i = cat.indexOf.get(id);
+      return i === undefined ? [] : [planInk(cat.inks[i]!)];
+    });
+    return { id: row.id, binderId: row.binder_id, inkIds, inks, addedAt: row.added_at };
+  }
+
+  async function binderPlans(binderId: number, viewerId: string | null): Promise<BinderPlanList> {
+    const b = await visibleBinder(binderId, viewerId);
+    const cat = await catalogue();
+    return { items: (await repo.binderPlans(db, binderId)).map((r) => toBinderPlan(cat, r)), canEdit: b.owner_id === viewerId };
+  }
+
+  async function savePlan(userId: string, binderId: number, inkIds: number[]): Promise<BinderPlan> {
+    await ownBinder(binderId, userId);
+    const cat = await catalogue();
+    const missing = inkIds.filter((id) => !cat.indexOf.has(id));
+    if (missing.length) throw new AppError("unknown_inks", "Some inks of this plan are not in the catalogue.", 422, { inks: [`unknown ink id${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}`] });
+    if ((await repo.countBinderPlans(db, binderId)) >= MAX_BINDER_PLANS) {
+      throw new AppError("binder_full", `A binder holds at most ${MAX_BINDER_PLANS} planned strips.`, 409);
+    }
+    return toBinderPlan(cat, await repo.insertBinderPlan(db, binderId, inkIds, nowIso()));
+  }
+
+  async function removePlan(userId: string, binderId: number, planId: number): Promise<void> {
+    await ownBinder(binderId, userId);
+    if (!(await repo.deleteBinderPlan(db, binderId, planId))) throw notFound("That planned strip");
+  }
+
+  return { findBridges, inksBeside, practiceCard, stashChart, binderPlans, savePlan, removePlan, catalogue };
 }
 
 export type PlanService = ReturnType<typeof createPlanService>;

@@ -9,6 +9,8 @@ import { PageHeader } from "../../components/ui/page-header";
 import { useMe } from "../../features/accounts/api/get-me";
 import { inkQueryOptions } from "../../features/inks/api/get-ink";
 import { useInksById } from "../../features/inks/api/get-inks-by-id";
+import { myBindersQueryOptions } from "../../features/binders/api/get-my-binders";
+import { SavePlanToBinder } from "../../features/plan/components/save-plan-to-binder";
 import { Notice } from "../../components/ui/notice";
 import { Button } from "../../components/ui/button";
 import { errorMessage, isApiError } from "../../lib/api-client";
@@ -42,6 +44,7 @@ export default function PlanPage() {
   const ids = useMemo(() => parsePlanInks(params), [params]);
   const { data: me } = useMe();
   const stash = useQuery({ ...stashQueryOptions(), enabled: !!me });
+  const binders = useQuery({ ...myBindersQueryOptions(), enabled: !!me });
   const stashIds = useMemo(() => new Set((stash.data ?? []).map((i) => i.ink.id)), [stash.data]);
   const bridge = useMemo(() => parseBridgeRequest(params), [params]);
   const location = useLocation();
@@ -113,6 +116,13 @@ export default function PlanPage() {
             onRemove={(i) => go(ids.filter((_, j) => j !== i))}
           />
           {ids.length >= MIN_PLAN_INKS && <PlanShare ids={ids} />}
+          {ids.length >= MIN_PLAN_INKS && (
+            <SavePlanToBinder
+              ids={ids}
+              binders={me ? (binders.data ?? []).map((b) => ({ id: b.id, name: b.name })) : null}
+              signInHref={`/sign-in?next=${encodeURIComponent(`${location.pathname}${location.search}`)}`}
+            />
+          )}
         </section>
 
         <section aria-labelledby="plan-preview" className="flex min-w-0 flex-col gap-4">

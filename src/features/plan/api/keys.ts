@@ -8,4 +8,5 @@ export const planKeys = {
   bridges: () => [...planKeys.all, "bridges"] as const,
   bridgeList: (q: BridgeRequest, viewerId: string | null) => [...planKeys.bridges(), q, viewerId] as const,
   beside: (inkId: number) => [...planKeys.all, "beside", inkId] as const,
+  binderPlans: (binderId: number) => [...planKeys.all, "binder-plans", binderId] as const,
 };

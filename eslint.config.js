@@ -31,7 +31,7 @@ export default tseslint.config(
     },
   },
   // Features never import another feature.
-  ...["strips", "inks", "search", "binders", "stash", "review", "accounts", "catalogue", "notices", "dev-mail"].map((feature) => ({
+  ...["strips", "inks", "search", "binders", "stash", "review", "accounts", "catalogue", "notices", "dev-mail", "plan"].map((feature) => ({
     files: [`src/features/${feature}/**/*.{ts,tsx}`],
     rules: {
       "no-restricted-imports": restrict([

@@ -20,6 +20,7 @@ import { devMailRouter } from "./modules/dev/dev-mail.router";
 import { inksRouter } from "./modules/inks/inks.router";
 import { bindersRouter } from "./modules/binders/binders.router";
 import { moderationRouter } from "./modules/moderation/moderation.router";
+import { planRouter } from "./modules/plan/plan.router";
 import { lookAlikesRouter } from "./modules/search/look-alikes.router";
 import { stashInkIds } from "./modules/stash/stash.service";
 import { stashRouter } from "./modules/stash/stash.router";
@@ -32,7 +33,7 @@ export type AppDeps = {
   config: AppConfig;
   mailer: Mailer;
   logger: Logger;
-  services: Pick<Services, "store" | "uploads" | "strips" | "moderation" | "binders" | "stash">;
+  services: Pick<Services, "store" | "uploads" | "strips" | "moderation" | "binders" | "stash" | "plan">;
   /** In development: Vite's middleware instead of the built client. */
   clientMiddleware?: RequestHandler;
   /** Folder of the built client (default ./dist). */
@@ -106,6 +107,7 @@ export function createApp(deps: AppDeps) {
   api.use(moderationRouter(deps.services.moderation, scale));
   api.use(bindersRouter(deps.services.binders));
   api.use(stashRouter(deps.services.stash));
+  api.use(planRouter(deps.services.plan));
   api.use(lookAlikesRouter(db, { stashOf: async (userId) => new Set(await stashInkIds(db, userId)) }));
   if (config.demo) api.use(devMailRouter(config.dataDir));
   api.use(apiNotFound);

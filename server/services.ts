@@ -6,6 +6,7 @@ import { createWorkerPool } from "./jobs/worker-pool";
 import type { UploadJob, UploadJobResult } from "./modules/uploads/upload-job";
 import { createBindersService } from "./modules/binders/binders.service";
 import { createModerationService } from "./modules/moderation/moderation.service";
+import { createPlanService } from "./modules/plan/plan.service";
 import { createStashService } from "./modules/stash/stash.service";
 import { createStripsService } from "./modules/strips/strips.service";
 import { createUploadsService } from "./modules/uploads/uploads.service";
@@ -31,6 +32,7 @@ export function createServices(deps: { db: Db; config: AppConfig; logger: Logger
     moderation,
     binders: createBindersService({ db: deps.db }),
     stash: createStashService({ db: deps.db }),
+    plan: createPlanService({ db: deps.db }),
     async close() {
       await uploads.idle();
       await pool.close();

@@ -38,6 +38,8 @@ export type StripMeasurement = {
   /** Inked part of the strip, as profile positions [from, to) of n. */
   inked: { from: number; to: number; n: number };
   bands: MeasuredBand[];
+  /** The colour profile along the whole strip (band positions index into it). */
+  profile: { n: number; lab: Float64Array };
   grid: StripGrid;
   notices: AnalysisNotice[];
 };
@@ -198,7 +200,7 @@ function readOne(strip: FoundStrip, grid: StripGrid, paper: PaperEstimate, rowWh
       bands = [...bands.slice(0, k), merged, ...bands.slice(k + 2)];
     } else k++;
   }
-  return { strip, inked: { from, to, n }, bands, grid, notices: [] };
+  return { strip, inked: { from, to, n }, bands, profile: { n, lab: profile.lab }, grid, notices: [] };
 }
 
 /** Outlines from the member (fractions) as ordered pixel quads. */

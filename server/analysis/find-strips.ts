@@ -2,7 +2,7 @@
 // straight on the desk. The card is the large paper-coloured region; strips on it are the regions
 // it encloses. Strips on the desk are regions whose colour the desk (seen at the photo's border)
 // does not explain. Each region must look like cut cardstock: long, straight-sided, filled.
-// Thresholds are ours, chosen on the tuning split of tests/analysis/scenes (decision 006).
+// Thresholds are ours, chosen on the tuning split of tests/analysis/scenes (decision 009).
 import { NoStripError } from "./no-strip-error";
 import { PAPER_MAX_TEXTURE, sceneMaps, type SceneMaps } from "./scene-maps";
 import { fitQuad, orderQuad, polygonArea, readingOrder, type OrderedQuad, type Point } from "./strip-quad";

@@ -1,7 +1,7 @@
 // Per-pixel maps of the photo that the strip finder works on: smoothed linear colour, the paper
 // candidates (bright, the paper's chromaticity, bright for their neighbourhood) and a colour
 // model of the desk seen at the photo's border. Thresholds are ours, chosen on the tuning split
-// of the scene generator (tests/analysis/scenes, seeds listed in docs/decisions/006).
+// of the scene generator (tests/analysis/scenes, seeds listed in docs/decisions/009).
 import { MAX_CONE_GAIN_RATIO, coneGainRatio } from "./paper-white";
 import { SRGB8_TO_LINEAR, SRGB_TO_XYZ } from "./srgb-lab";
 import type { RgbImage } from "./types";

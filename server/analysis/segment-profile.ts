@@ -2,6 +2,7 @@
 // dynamic programming with a penalty per band. See docs/decisions/002-strip-segmentation.md.
 import { deltaE2000, type Lab } from "../../shared/colour/index";
 import { D65_WHITE, SRGB_TO_XYZ, XYZ_TO_SRGB, labFFast, labToXyz, mulVec3 } from "./srgb-lab";
+import { blendResidual, labToDensity, type Density } from "../../shared/colour/blend";
 
 export type Segment = { from: number; to: number }; // sample indices, [from, to)
 
@@ -141,21 +142,11 @@ export class PrefixSums {
   }
 }
 
-/** Optical density (−ln reflectance) of a CIELAB colour, per linear-sRGB channel. */
-function density(l: number, a: number, b: number): [number, number, number] {
-  const rgb = mulVec3(XYZ_TO_SRGB, labToXyz(l, a, b));
-  return [-Math.log(Math.max(1e-4, rgb[0])), -Math.log(Math.max(1e-4, rgb[1])), -Math.log(Math.max(1e-4, rgb[2]))];
-}
-
 /**
  * SSE (in CIELAB) of a blend that is straight in optical density between the mean colour of the
  * w samples before i and of the w samples from j on: dye laid over dye multiplies reflectance
  * (Beer–Lambert), so layered blends are straight in density and curved in CIELAB.
  * Returned as table[i * (maxT + 1) + (j − i)] for 1 ≤ j − i ≤ maxT.
- *
- * Straight in density means geometric in reflectance: from one sample to the next each channel's
- * reflectance is multiplied by the same factor, so a blend costs three exponentials, not three
- * per sample.
  */
 function densityBridgeTable(lab: Float64Array, n: number, w: number, maxT: number): Float64Array {
   const table = new Float64Array((n + 1) * (maxT + 1)).fill(Infinity);
@@ -164,42 +155,17 @@ function densityBridgeTable(lab: Float64Array, n: number, w: number, maxT: numbe
     for (let t = from; t < to; t++) for (let c = 0; c < 3; c++) m[c] += lab[t * 3 + c] / (to - from);
     return m;
   };
-  const dens = new Float64Array(n * 3);
+  const dens: Density[] = [];
   for (let j = 0; j < n; j++) {
     const m = mean(j, Math.min(n, j + w));
-    dens.set(density(m[0], m[1], m[2]), j * 3);
+    dens.push(labToDensity({ l: m[0], a: m[1], b: m[2] }));
   }
-  // sRGB → XYZ rows, divided by the white's X and Z (CIELAB's X/Xn, Z/Zn).
-  const M = SRGB_TO_XYZ;
-  const xr = M[0] / D65_WHITE[0], xg = M[1] / D65_WHITE[0], xb = M[2] / D65_WHITE[0];
-  const yr = M[3], yg = M[4], yb = M[5];
-  const zr = M[6] / D65_WHITE[2], zg = M[7] / D65_WHITE[2], zb = M[8] / D65_WHITE[2];
   for (let i = 1; i < n; i++) {
     const a = mean(Math.max(0, i - w), i);
-    const dA = density(a[0], a[1], a[2]);
+    const dA = labToDensity({ l: a[0], a: a[1], b: a[2] });
     for (let m = 1; m <= maxT && i + m < n; m++) {
-      const o = (i + m) * 3;
-      // Reflectance at t = i is exp(−((1 − f)·dA + f·dB)) with f = 1/(m + 1); each step multiplies it by q.
-      const qr = Math.exp(-(dens[o]! - dA[0]) / (m + 1));
-      const qg = Math.exp(-(dens[o + 1]! - dA[1]) / (m + 1));
-      const qb = Math.exp(-(dens[o + 2]! - dA[2]) / (m + 1));
-      let r = Math.exp(-dA[0]) * qr;
-      let g = Math.exp(-dA[1]) * qg;
-      let b = Math.exp(-dA[2]) * qb;
-      let sse = 0;
-      for (let t = i; t < i + m; t++) {
-        const fx = labFFast(xr * r + xg * g + xb * b);
-        const fy = labFFast(yr * r + yg * g + yb * b);
-        const fz = labFFast(zr * r + zg * g + zb * b);
-        const dl = lab[t * 3]! - (116 * fy - 16);
-        const da = lab[t * 3 + 1]! - 500 * (fx - fy);
-        const db = lab[t * 3 + 2]! - 200 * (fy - fz);
-        sse += dl * dl + da * da + db * db;
-        r *= qr;
-        g *= qg;
-        b *= qb;
-      }
-      table[i * (maxT + 1) + m] = sse;
+      // The shared blend model (shared/colour/blend.ts): samples i … i+m−1 against it.
+      table[i * (maxT + 1) + m] = blendResidual(dA, dens[i + m]!, m, lab, i);
     }
   }
   return table;
@@ -208,7 +174,7 @@ function densityBridgeTable(lab: Float64Array, n: number, w: number, maxT: numbe
 /**
  * The same as densityBridgeTable for a blend straight in linear reflectance: ink laid as a
  * pattern of dots or sponge texture, where what blends is the area covered, not the layer
- * thickness (decision 006; the third path decision 002 left room for).
+ * thickness (decision 009; the third path decision 002 left room for).
  */
 function reflectanceBridgeTable(lab: Float64Array, n: number, w: number, maxT: number): Float64Array {
   const table = new Float64Array((n + 1) * (maxT + 1)).fill(Infinity);
@@ -220,7 +186,7 @@ function reflectanceBridgeTable(lab: Float64Array, n: number, w: number, maxT: n
   const dens = new Float64Array(n * 3);
   for (let j = 0; j < n; j++) {
     const m = mean(j, Math.min(n, j + w));
-    dens.set(density(m[0], m[1], m[2]), j * 3);
+    dens.set(labToDensity({ l: m[0], a: m[1], b: m[2] }), j * 3);
   }
   // sRGB → XYZ rows, divided by the white's X and Z (CIELAB's X/Xn, Z/Zn).
   const M = SRGB_TO_XYZ;
@@ -229,7 +195,7 @@ function reflectanceBridgeTable(lab: Float64Array, n: number, w: number, maxT: n
   const zr = M[6] / D65_WHITE[2], zg = M[7] / D65_WHITE[2], zb = M[8] / D65_WHITE[2];
   for (let i = 1; i < n; i++) {
     const a = mean(Math.max(0, i - w), i);
-    const dA = density(a[0], a[1], a[2]);
+    const dA = labToDensity({ l: a[0], a: a[1], b: a[2] });
     for (let m = 1; m <= maxT && i + m < n; m++) {
       const o = (i + m) * 3;
       // Reflectance at t = i is exp(−((1 − f)·dA + f·dB)) with f = 1/(m + 1); each step multiplies it by q.

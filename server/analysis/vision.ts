@@ -2,7 +2,7 @@
 // geometric steps of finding strips: morphology, connected components, convex hulls, polygon
 // simplification, rotated rectangles and the four-point homography. Loaded once per thread
 // (≈ 0.35 s); every Mat lives in the WebAssembly heap and must be deleted, so each helper here
-// takes plain arrays in and gives plain arrays out. See docs/decisions/006-reading-real-photos.md.
+// takes plain arrays in and gives plain arrays out. See docs/decisions/009-reading-real-photos.md.
 import { createRequire } from "node:module";
 
 /** The part of OpenCV's JavaScript API used here (the package's own types are very loose). */

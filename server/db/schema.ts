@@ -218,6 +218,14 @@ export interface BinderItemTable {
   added_at: string;
 }
 
+export interface BinderPlanTable {
+  id: Generated<number>;
+  binder_id: number;
+  /** JSON array of ink ids, in order (2–6). */
+  ink_ids: string;
+  added_at: string;
+}
+
 export interface StashItemTable {
   user_id: string;
   ink_id: number;
@@ -255,6 +263,7 @@ export interface Database extends SearchTables {
   mail_outbox: MailOutboxTable;
   binders: BinderTable;
   binder_items: BinderItemTable;
+  binder_plans: BinderPlanTable;
   stash_items: StashItemTable;
   member_sessions: MemberSessionTable;
 }

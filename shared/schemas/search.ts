@@ -45,6 +45,7 @@ const brandSlug = z
  * must all be in a strip, several colours must all be found among its bands (one band may
  * answer two colours), several brands must all be represented.
  * Sort defaults to "closest" when a colour is given, else "newest"; "closest" needs a colour.
+ * `adjacent=true` with two inks: the two sit side by side in the ink order (either way round).
  */
 export const stripSearchQuery = stripListQuery
   .extend({
@@ -65,6 +66,8 @@ export const stripSearchQuery = stripListQuery
     ),
     paper: one(z.enum(papers, { error: "choose a paper from the list" }).optional()),
     stash: one(z.enum(stashModes, { error: "must be all or missingOne" }).optional()),
+    /** With exactly two required inks: they sit directly next to each other in the ink order. */
+    adjacent: one(z.enum(["true", "false"], { error: "must be true or false" }).optional()).transform((v) => v === "true"),
     sort: one(z.enum(searchSorts, { error: "must be newest, saves or closest" }).optional()),
     cursor: one(z.string().max(200, "is not a valid cursor").optional()),
     limit: one(z.coerce.number({ error: "must be a number" }).int("must be a whole number").min(1, "must be at least 1").max(50, "must be at most 50").default(20)),
@@ -72,6 +75,9 @@ export const stripSearchQuery = stripListQuery
   .superRefine((q, ctx) => {
     if (q.sort === "closest" && !q.color?.length) {
       ctx.addIssue({ code: "custom", path: ["sort"], message: "closest needs a colour to be close to" });
+    }
+    if (q.adjacent && new Set(q.ink ?? []).size !== 2) {
+      ctx.addIssue({ code: "custom", path: ["adjacent"], message: "next to each other needs exactly two inks" });
     }
     const both = (q.ink ?? []).filter((id) => q.notInk?.includes(id));
     if (both.length) {

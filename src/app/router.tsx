@@ -17,6 +17,7 @@ export const router = createBrowserRouter([
       { index: true, lazy: page(() => import("./routes/home")) },
       { path: "gallery", lazy: page(() => import("./routes/gallery")) },
       { path: "search", lazy: page(() => import("./routes/search")) },
+      { path: "plan", lazy: page(() => import("./routes/plan")) },
       { path: "post", lazy: page(() => import("./routes/post")) },
       { path: "strips/:id", lazy: page(() => import("./routes/strip")) },
       { path: "members/:id", lazy: page(() => import("./routes/member")) },

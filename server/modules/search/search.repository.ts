@@ -19,6 +19,8 @@ export type StripFilter = {
   inkCount?: number;
   paper?: (typeof papers)[number];
   authorId?: string;
+  /** These two inks directly next to each other in the ink order (either way round). */
+  adjacent?: [number, number];
   /** Strips blendable from this member's stash ("all"), or missing exactly one ink of it. */
   stash?: { userId: string; mode: "all" | "missingOne" };
 };
@@ -41,6 +43,11 @@ function inkConditions(f: StripFilter, id: RawBuilder<unknown>, requiredDone = f
   }
   if (f.inkType) {
     c.push(sql`exists (select 1 from strip_inks ft join inks it on it.id = ft.ink_id where ft.strip_id = ${id} and it.type = ${f.inkType})`);
+  }
+  if (f.adjacent) {
+    const [a, b] = f.adjacent;
+    c.push(sql`exists (select 1 from strip_inks fa join strip_inks fn on fn.strip_id = fa.strip_id and abs(fn.position - fa.position) = 1
+      where fa.strip_id = ${id} and fa.ink_id = ${a} and fn.ink_id = ${b})`);
   }
   if (f.stash) {
     const notOwned = sql`select count(*) from strip_inks fs where fs.strip_id = ${id}

@@ -60,6 +60,7 @@ async function resolveFilter(db: SearchDb, q: StripSearchQuery, viewerId: string
     inkCount: q.inkCount,
     paper: q.paper,
     authorId: q.author,
+    ...(q.adjacent && q.ink?.length === 2 && { adjacent: [q.ink[0]!, q.ink[1]!] as [number, number] }),
     ...(q.stash && viewerId && { stash: { userId: viewerId, mode: q.stash } }),
   };
 }

@@ -11,6 +11,7 @@ import { SignOutButton } from "../../features/accounts/components/sign-out-butto
 const navItems = [
   { to: "/gallery", label: "Gallery", end: false },
   { to: "/search", label: "Search", end: false },
+  { to: "/plan", label: "Plan", end: false },
   { to: "/inks", label: "Inks", end: false },
   { to: "/help", label: "Help", end: false },
 ] as const;

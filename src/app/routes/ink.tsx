@@ -17,6 +17,7 @@ import { InkForm } from "../../features/inks/components/ink-form";
 import { LookAlikes } from "../../features/inks/components/look-alikes";
 import { InkSwatch } from "../../features/inks/components/ink-swatch";
 import { DiscontinuedBadge, InkTypeBadge } from "../../features/inks/components/ink-type-badge";
+import { BlendedBeside } from "../../features/plan/components/blended-beside";
 import { StripFeed } from "../../features/strips/components/strip-feed";
 import { GALLERY_PAGE_SIZE } from "../../features/strips/strip-filters";
 import type { Ink } from "../../../shared/schemas/inks";
@@ -151,6 +152,14 @@ function InkDetail({ id }: { id: number }) {
           Look-alikes
         </h2>
         <LookAlikes ink={data} viewer={viewer} />
+      </section>
+
+      <section aria-labelledby="ink-beside" className="space-y-4">
+        <h2 id="ink-beside" className="border-b border-rule pb-2 text-2xl font-bold">
+          Blended next to it
+        </h2>
+        <p className="text-ink-soft">The inks members most often blend straight into {data.name} in published strips.</p>
+        <BlendedBeside inkId={data.id} inkName={data.name} />
       </section>
 
       <section aria-labelledby="ink-strips" className="space-y-4">

@@ -18,6 +18,7 @@ import { ChosenColours } from "../../features/search/components/chosen-colours";
 import { ChosenInks } from "../../features/search/components/chosen-inks";
 import { ClosenessSlider } from "../../features/search/components/closeness-slider";
 import { ColourChooser } from "../../features/search/components/colour-chooser";
+import { InkPlacementChoice } from "../../features/search/components/ink-placement-choice";
 import { NoResults } from "../../features/search/components/no-results";
 import { SearchSortSwitch } from "../../features/search/components/search-sort";
 import { StashChoice } from "../../features/search/components/stash-choice";
@@ -128,6 +129,7 @@ export default function SearchPage() {
                 />
               )}
             />
+            {search.ink.length === 2 && <InkPlacementChoice adjacent={!!search.adjacent} onChange={(adjacent) => go({ ...search, adjacent: adjacent || undefined })} />}
             <InkPicker
               label="Leave out"
               hint="No strip with these inks."

@@ -1,6 +1,7 @@
 import { PageHeader } from "../../components/ui/page-header";
 import { RequireRole } from "../../features/accounts/components/require-role";
 import { InkPicker } from "../../features/inks/components/ink-picker";
+import { PrintLinks } from "../../features/plan/components/print-links";
 import { MyStash, type StashInkPickerSlot } from "../../features/stash/components/my-stash";
 
 const stashPicker: StashInkPickerSlot = ({ onPick, heldIds, busy }) => (
@@ -28,6 +29,16 @@ export default function StashPage() {
             intro="Keep your stash here so you never buy an ink twice, see which inks are running low, and find strips you can blend with what you have."
           />
           <MyStash inkPicker={stashPicker} />
+          <section aria-labelledby="stash-chart" className="mt-10 flex flex-col gap-2 border-t border-rule pt-6">
+            <h2 id="stash-chart" className="text-xl font-bold">
+              Stash chart
+            </h2>
+            <p className="max-w-prose text-ink-soft">
+              Every ink you own as a labelled box with its catalogue colour, grouped by hue, and an empty box beside it to
+              swatch the real ink.
+            </p>
+            <PrintLinks href="/api/stash/chart.pdf" what="your stash chart" />
+          </section>
         </>
       )}
     </RequireRole>

@@ -18,7 +18,8 @@ export type Paper = (typeof papers)[number];
 
 /**
  * A search as the page holds it. The address bar carries the same names as GET /api/strips
- * (`ink`, `notInk`, `color`, `maxDeltaE`, `brand`, `type`, `inkCount`, `paper`, `stash`, `sort`),
+ * (`ink`, `notInk`, `color`, `maxDeltaE`, `brand`, `type`, `inkCount`, `paper`, `stash`, `sort`,
+ * `adjacent`),
  * so a shared link opens the same search.
  */
 export type SearchState = {
@@ -32,6 +33,8 @@ export type SearchState = {
   inkCount?: number;
   paper?: Paper;
   stash?: StashMode;
+  /** With exactly two inks: they sit next to each other in the ink order (else: anywhere). */
+  adjacent?: boolean;
   /** As asked; see effectiveSort for what the list uses. */
   sort?: SearchSort;
 };
@@ -79,6 +82,7 @@ export function parseSearch(params: URLSearchParams): SearchState {
     inkCount,
     paper: oneOf(papers, params.get("paper")),
     stash: oneOf(stashModes, params.get("stash")),
+    ...(params.get("adjacent") === "true" && ink.length === 2 && { adjacent: true }),
     sort,
   };
 }
@@ -95,6 +99,7 @@ export function searchToParams(s: SearchState): URLSearchParams {
   if (s.inkCount) p.set("inkCount", String(s.inkCount));
   if (s.paper) p.set("paper", s.paper);
   if (s.stash) p.set("stash", s.stash);
+  if (s.adjacent && s.ink.length === 2) p.set("adjacent", "true");
   if (s.sort && s.sort !== defaultSort(s)) p.set("sort", s.sort);
   return p;
 }
@@ -119,6 +124,7 @@ export function searchApiQuery(s: SearchState, limit: number) {
     inkCount: s.inkCount,
     paper: s.paper,
     stash: s.stash,
+    adjacent: s.adjacent && s.ink.length === 2 ? ("true" as const) : undefined,
     sort: effectiveSort(s),
     limit,
   };
@@ -134,7 +140,8 @@ export function filterCount(s: SearchState): number {
     (s.type ? 1 : 0) +
     (s.inkCount ? 1 : 0) +
     (s.paper ? 1 : 0) +
-    (s.stash ? 1 : 0)
+    (s.stash ? 1 : 0) +
+    (s.adjacent ? 1 : 0)
   );
 }
 
@@ -157,6 +164,7 @@ export function loosenings(s: SearchState, names: { ink: (id: number) => string;
   if (wider !== null) out.push({ key: "wider", label: `Widen the closeness to ΔE ${wider}`, next: { ...s, maxDeltaE: wider } });
   if (s.stash === "all") out.push({ key: "stash-one", label: "Include strips missing one of your inks", next: { ...s, stash: "missingOne" } });
   if (s.stash) out.push({ key: "stash", label: "Search beyond your stash", next: { ...s, stash: undefined } });
+  if (s.adjacent) out.push({ key: "adjacent", label: "The two inks anywhere in the strip", next: { ...s, adjacent: undefined } });
   if (s.inkCount) out.push({ key: "count", label: "Any number of inks", next: { ...s, inkCount: undefined } });
   if (s.paper) out.push({ key: "paper", label: "Any paper", next: { ...s, paper: undefined } });
   if (s.type) out.push({ key: "type", label: "Any ink type", next: { ...s, type: undefined } });

@@ -1,0 +1,12 @@
+import { writeFile } from "node:fs/promises";
+import { srgbToLab } from "../shared/colour/index";
+import { analyzeStripImage } from "../server/analysis/index";
+import { renderScene, sceneToJpeg } from "../server/demo/synthetic-photo";
+import { RENDITION_CHART } from "../tests/analysis/support/rendition-chart";
+const patches = RENDITION_CHART.slice(18, 24);
+const bands = patches.map((p, i) => ({ start: i / 6 + (i > 0 ? 0.002 : 0), end: (i + 1) / 6 - (i < 5 ? 0.002 : 0), lab: srgbToLab(...p.srgb) }));
+const scene = renderScene({ width: 1200, height: 900, orientation: "vertical", tiltDeg: -6 + 2, lengthShare: 0.8, thicknessShare: 0.14, bands, blend: "hard", illuminant: process.argv[2] ?? "A", exposure: 0.9, vignette: 0.2, noise: 2, seed: 503 });
+await writeFile("/tmp/chart.jpg", await sceneToJpeg(scene, 88));
+const r = await analyzeStripImage("/tmp/chart.jpg", { catalogue: [] });
+console.log(r.paper, r.strips[0].outline, r.bands.map((b) => [b.start, b.end, b.lab]));
+console.log(bands.map((b) => b.lab));

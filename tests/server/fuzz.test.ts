@@ -71,7 +71,10 @@ async function fuzz(who: string, cookie: string | null): Promise<{ failures: Fai
   const check = async (method: string, url: string, body?: Body) => {
     const res = await hit(cookie, method, url, body);
     sent++;
-    if (res.status >= 500) {
+    // The page routes answer 503 "not built yet" when the client has not been built (npm test
+    // runs these tests before `vite build`): a state of the install, not of anyone's input.
+    const unbuilt = res.status === 503 && /not built yet/.test(String(res.text));
+    if (res.status >= 500 && !unbuilt) {
       const sentText = body ? `${body.type} ${String(body.data).slice(0, 60)}` : "";
       failures.push({ who, method, url: url.slice(0, 120), sent: sentText, status: res.status, body: String(res.text).slice(0, 200) });
     }

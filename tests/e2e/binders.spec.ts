@@ -38,7 +38,10 @@ test("a member saves strips to a new binder from the strip page and reorders the
   // Keyboard: the first strip moves down twice; focus stays on its button.
   await page.getByRole("button", { name: `Move down: ${titles[0]}` }).focus();
   await page.keyboard.press("Enter");
+  // Each move is saved before the next key press is taken (the buttons wait while it saves).
+  await expect.poll(order).toEqual([titles[1], titles[0], titles[2]]);
   await expect(page.getByRole("button", { name: `Move down: ${titles[0]}` })).toBeFocused();
+  await expect(page.getByRole("button", { name: `Move down: ${titles[0]}` })).toBeEnabled();
   await page.keyboard.press("Enter");
   await expect.poll(order).toEqual([titles[1], titles[2], titles[0]]);
 

@@ -361,16 +361,7 @@ export function findPaperWhite(img: RgbImage, white?: WhitePoint): PaperEstimate
   let normalised: [number, number, number];
   let measured: [number, number, number];
   if (kept.length > 0) {
-    const nr = new Float64Array(kept.length);
-    const ng = new Float64Array(kept.length);
-    const nb = new Float64Array(kept.length);
-    kept.forEach((p, i) => {
-      const f = Math.max(1e-6, evaluateField(field, s.x[p], s.y[p]));
-      nr[i] = s.r[p] / f;
-      ng[i] = s.g[p] / f;
-      nb[i] = s.b[p] / f;
-    });
-    normalised = [quantileOf(nr, 0.5), quantileOf(ng, 0.5), quantileOf(nb, 0.5)];
+    normalised = fieldNormalisedMedian(s, field, kept);
     measured = pointColour ?? [quantileOf(s.r, 0.5, kept), quantileOf(s.g, 0.5, kept), quantileOf(s.b, 0.5, kept)];
   } else {
     const c = pointColour!;
@@ -380,6 +371,20 @@ export function findPaperWhite(img: RgbImage, white?: WhitePoint): PaperEstimate
   // A "paper" that would need an extreme correction is a pale ink filling the frame, not paper.
   if (!white && coneGainRatio(normalised) > MAX_CONE_GAIN_RATIO) return noPaper();
   return { found: true, measuredLinear: measured, field, correction: correctionFor(normalised), paperSamples: kept.length };
+}
+
+/** Median paper colour after dividing each sample by the brightness field (so Y ≈ 1). */
+function fieldNormalisedMedian(s: Samples, field: PaperField, kept: Int32Array): [number, number, number] {
+  const nr = new Float64Array(kept.length);
+  const ng = new Float64Array(kept.length);
+  const nb = new Float64Array(kept.length);
+  kept.forEach((p, i) => {
+    const f = Math.max(1e-6, evaluateField(field, s.x[p], s.y[p]));
+    nr[i] = s.r[p] / f;
+    ng[i] = s.g[p] / f;
+    nb[i] = s.b[p] / f;
+  });
+  return [quantileOf(nr, 0.5), quantileOf(ng, 0.5), quantileOf(nb, 0.5)];
 }
 
 /** The photographed paper colour as 8-bit sRGB. */
@@ -398,16 +403,7 @@ export function paperFromRegion(img: RgbImage, isPaper: (x: number, y: number) =
   const idx = select(s.n, (i) => !s.clipped[i] && isPaper(Math.round((s.x[i] + 0.5) * w), Math.round((s.y[i] + 0.5) * h)));
   if (idx.length < 20) return null;
   const { field, kept } = fitField(s, idx);
-  const nr = new Float64Array(kept.length);
-  const ng = new Float64Array(kept.length);
-  const nb = new Float64Array(kept.length);
-  kept.forEach((p, i) => {
-    const f = Math.max(1e-6, evaluateField(field, s.x[p], s.y[p]));
-    nr[i] = s.r[p] / f;
-    ng[i] = s.g[p] / f;
-    nb[i] = s.b[p] / f;
-  });
-  const normalised: [number, number, number] = [quantileOf(nr, 0.5), quantileOf(ng, 0.5), quantileOf(nb, 0.5)];
+  const normalised = fieldNormalisedMedian(s, field, kept);
   if (coneGainRatio(normalised) > MAX_CONE_GAIN_RATIO) return null;
   const measured: [number, number, number] = [quantileOf(s.r, 0.5, kept), quantileOf(s.g, 0.5, kept), quantileOf(s.b, 0.5, kept)];
   return { found: true, measuredLinear: measured, field, correction: correctionFor(normalised), paperSamples: kept.length };
